@@ -1,0 +1,25 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { UserEntity } from './modules/users/user.entity.ts';
+import { PasswordResetTokenEntity } from './modules/auth/password-reset-token.entity.ts';
+import { Foundation1764633600000 } from './migrations/1764633600000-Foundation.ts';
+
+export const entities = [UserEntity, PasswordResetTokenEntity];
+export const migrations = [Foundation1764633600000];
+
+/** The app's DataSource. Schema changes go through migrations only (`synchronize` is off). */
+export function createDataSource(url: string): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities,
+    migrations,
+    synchronize: false,
+    migrationsRun: false,
+    logging: ['error'],
+    extra: { max: 10 },
+  });
+}
+
+/** For the TypeORM command line (`npm run migration:run`), which needs DATABASE_URL. */
+export default createDataSource(process.env.DATABASE_URL ?? 'postgres://localhost/blockwright');

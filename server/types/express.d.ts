@@ -1,0 +1,22 @@
+import type { Role } from '../modules/users/user.entity.ts';
+
+declare global {
+  namespace Express {
+    /** What passport puts on `req.user`: the signed-in account, loaded fresh per request. */
+    interface User {
+      id: string;
+      email: string;
+      displayName: string;
+      role: Role;
+      createdAt: Date;
+    }
+  }
+}
+
+declare module 'express-session' {
+  interface SessionData {
+    csrfToken?: string;
+  }
+}
+
+export {};

@@ -1,0 +1,80 @@
+import type { Server } from 'node:http';
+import path from 'node:path';
+import type { Express } from 'express';
+import pg from 'pg';
+import { pino } from 'pino';
+import { createApp, type AppDeps } from '../../server/app.ts';
+import { projectRoot } from '../../server/config.ts';
+import { createMailer, type Mailer } from '../../server/modules/mail/mailer.ts';
+import { UsersService } from '../../server/modules/users/users.service.ts';
+import { DEMO_ACCOUNTS } from '../../server/seed/demo.ts';
+import { createTestDatabase, type TestDatabase } from './database.ts';
+
+export interface TestApp {
+  app: Express;
+  database: TestDatabase;
+  mailer: Mailer;
+  users: UsersService;
+  close(): Promise<void>;
+}
+
+export interface TestAppOptions {
+  env?: AppDeps['config']['env'];
+  signInAttempts?: number;
+  publicUrl?: string;
+  serveClient?: boolean;
+}
+
+/** The real app on a fresh database of its own (the demo studio seeded), with the local outbox; no port yet. */
+export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
+  const database = await createTestDatabase();
+  const users = new UsersService(database.db);
+  const mailer = await createMailer({ smtp: undefined, mailFrom: 'Blockwright <no-reply@blockwright.localhost>' });
+  const sessionPool = new pg.Pool({ connectionString: database.url, max: 3 });
+  const app = createApp({
+    config: {
+      env: options.env ?? 'test',
+      publicUrl: options.publicUrl ?? 'http://127.0.0.1',
+      cookieSecure: false,
+      signInAttempts: options.signInAttempts ?? 10,
+    },
+    db: database.db,
+    sessionPool,
+    sessionSecret: 'test-secret-that-is-long-enough-for-sessions',
+    mailer,
+    logger: pino({ level: 'silent' }),
+    demoAccounts: DEMO_ACCOUNTS,
+    ...(options.serveClient ? { clientDir: path.join(projectRoot, 'dist') } : {}),
+  });
+  return {
+    app,
+    database,
+    mailer,
+    users,
+    async close() {
+      await mailer.close();
+      await sessionPool.end();
+      await database.drop();
+    },
+  };
+}
+
+/** The real app, demo studio seeded, serving the built client on an ephemeral loopback port. */
+export async function startTestApp(options: TestAppOptions = {}): Promise<{ url: string; close(): Promise<void> }> {
+  const t = await createTestApp({ ...options, serveClient: true });
+  const server: Server = await new Promise((resolve) => {
+    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : 0;
+  return {
+    url: `http://127.0.0.1:${port}`,
+    async close() {
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        server.closeAllConnections();
+      });
+      await t.close();
+    },
+  };
+}

@@ -1,0 +1,39 @@
+/**
+ * Once per `vitest run`: a fresh, throw-away PostgreSQL cluster (fsync off) on a free loopback
+ * port, with a template database migrated to the current schema and the demo studio seeded. Each test file clones the
+ * template into a database of its own (see database.ts), so files run in parallel without
+ * sharing rows.
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { freePort, startCluster } from '../../server/db/postgres.ts';
+import { openDatabase } from '../../server/db/database.ts';
+import { UsersService } from '../../server/modules/users/users.service.ts';
+import { seedDemo } from '../../server/seed/demo.ts';
+
+const TEMPLATE_DATABASE = 'bw_template';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    pgUrlBase: string;
+    pgTemplate: string;
+  }
+}
+
+export default async function setup(project: TestProject) {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'blockwright-test-'));
+  const cluster = await startCluster({ dir, port: await freePort(), ephemeral: true });
+  await cluster.createDatabase(TEMPLATE_DATABASE);
+  const db = await openDatabase(cluster.url(TEMPLATE_DATABASE));
+  await seedDemo(new UsersService(db));
+  await db.destroy();
+  // The URL of the cluster's maintenance database; test files swap the database name.
+  project.provide('pgUrlBase', cluster.url('postgres'));
+  project.provide('pgTemplate', TEMPLATE_DATABASE);
+  return () => {
+    cluster.stop();
+    fs.rmSync(dir, { recursive: true, force: true });
+  };
+}
