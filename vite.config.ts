@@ -20,5 +20,6 @@ export default defineConfig({
     testTimeout: 30_000,
     hookTimeout: 60_000,
     pool: 'forks',
+    reporters: ['default', './tests/support/summary-reporter.ts'],
   },
 });

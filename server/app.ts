@@ -59,6 +59,8 @@ export function createApp(deps: AppDeps): Express {
           imgSrc: ["'self'", 'data:', 'blob:'],
         },
       },
+      // HSTS only means something over https.
+      strictTransportSecurity: deps.config.cookieSecure,
     }),
   );
 

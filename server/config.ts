@@ -51,7 +51,9 @@ export interface Config {
 
 /** Read the configuration from environment variables; a bad value stops start-up with one line per variable. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
-  const parsed = envSchema.safeParse(env);
+  // An empty variable counts as unset.
+  const given = Object.fromEntries(Object.entries(env).filter(([, v]) => v !== undefined && v !== ''));
+  const parsed = envSchema.safeParse(given);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Configuration is not valid:\n${lines.join('\n')}`);

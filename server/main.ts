@@ -11,7 +11,7 @@ import type { Server } from 'node:http';
 import pg from 'pg';
 import { pino } from 'pino';
 import { createApp } from './app.ts';
-import { loadConfig, projectRoot } from './config.ts';
+import { loadConfig, projectRoot, type Config } from './config.ts';
 import { openDatabase } from './db/database.ts';
 import { startCluster, type Cluster } from './db/postgres.ts';
 import { createMailer } from './modules/mail/mailer.ts';
@@ -32,8 +32,19 @@ function sessionSecretFor(dataDir: string, given: string | undefined): string {
 }
 
 async function main(): Promise<void> {
-  const config = loadConfig();
-  const logger = pino({ level: config.logLevel });
+  let config: Config;
+  try {
+    config = loadConfig();
+  } catch (err) {
+    process.stderr.write(`${err instanceof Error ? err.message : String(err)}\n`);
+    process.exit(1);
+  }
+  // Readable lines in a terminal; JSON lines otherwise (for log collectors).
+  const pretty = process.stdout.isTTY && config.env !== 'production';
+  const logger = pino({
+    level: config.logLevel,
+    ...(pretty ? { transport: { target: 'pino-pretty', options: { ignore: 'pid,hostname', translateTime: 'SYS:HH:MM:ss' } } } : {}),
+  });
   const say = (line: string) => logger.info(line);
   const cleanups: Array<() => Promise<void> | void> = [];
 

@@ -24,6 +24,8 @@ declare module 'vitest' {
 
 export default async function setup(project: TestProject) {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'blockwright-test-'));
+  // mkdtemp makes it private to us; as root, the postgres user must be able to reach the cluster inside.
+  fs.chmodSync(dir, 0o755);
   const cluster = await startCluster({ dir, port: await freePort(), ephemeral: true });
   await cluster.createDatabase(TEMPLATE_DATABASE);
   const db = await openDatabase(cluster.url(TEMPLATE_DATABASE));
