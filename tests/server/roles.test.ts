@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
-import { createTestApp, type TestApp } from '../support/app.ts';
+import { createTestApp, type TestApp } from '../support/app-server.ts';
 import { Client } from '../support/http.ts';
 
 let t: TestApp;
