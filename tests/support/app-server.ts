@@ -5,6 +5,7 @@ import pg from 'pg';
 import { pino } from 'pino';
 import { createApp, type AppDeps } from '../../server/app.ts';
 import { projectRoot } from '../../server/config.ts';
+import { freePort } from '../../server/db/postgres.ts';
 import { createMailer, type Mailer } from '../../server/modules/mail/mailer.ts';
 import { UsersService } from '../../server/modules/users/users.service.ts';
 import { DEMO_ACCOUNTS } from '../../server/seed/demo.ts';
@@ -61,14 +62,15 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
 
 /** The real app, demo studio seeded, serving the built client on an ephemeral loopback port. */
 export async function startTestApp(options: TestAppOptions = {}): Promise<{ url: string; close(): Promise<void> }> {
-  const t = await createTestApp({ ...options, serveClient: true });
-  const server: Server = await new Promise((resolve) => {
-    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
+  // The port is chosen first so that e-mailed links carry the real address.
+  const url = `http://127.0.0.1:${await freePort()}`;
+  const t = await createTestApp({ publicUrl: url, ...options, serveClient: true });
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = t.app.listen(Number(new URL(url).port), '127.0.0.1', () => resolve(s));
+    s.once('error', reject);
   });
-  const address = server.address();
-  const port = typeof address === 'object' && address ? address.port : 0;
   return {
-    url: `http://127.0.0.1:${port}`,
+    url,
     async close() {
       await new Promise<void>((resolve) => {
         server.close(() => resolve());

@@ -1,0 +1,142 @@
+import { paths } from '../config/paths';
+import type { Role } from '../types/api';
+
+/**
+ * The areas of Blockwright, who may enter each, and what each is for. The app shell's
+ * navigation, the dashboard and the "coming" pages all read this one list.
+ */
+
+export type AreaId =
+  | 'makes'
+  | 'patterns'
+  | 'fitPlanner'
+  | 'fabrics'
+  | 'library'
+  | 'coaching'
+  | 'adminUsers'
+  | 'adminOutbox'
+  | 'account';
+
+export type AreaGroup = 'work' | 'together' | 'admin' | 'self';
+
+export type Area = {
+  id: AreaId;
+  /** The link's visible text, which is also its accessible name. */
+  label: string;
+  to: string;
+  group: AreaGroup;
+  /** Who sees the area; everyone signed in when absent. */
+  roles?: readonly Role[];
+  /** One sentence on what the area does (or will do). */
+  summary: string;
+  /** False while the area shows its "coming" page. */
+  built: boolean;
+};
+
+export const coachRoles: readonly Role[] = ['coach', 'admin'];
+export const adminRoles: readonly Role[] = ['admin'];
+
+export const areas: readonly Area[] = [
+  {
+    id: 'makes',
+    label: 'Makes',
+    to: paths.makes.build(),
+    group: 'work',
+    summary:
+      'A make gathers one garment in progress: your measurements, the pattern, the fabric, each round of alterations, fit notes and photos, shared with a sewing friend or coach if you invite them.',
+    built: false,
+  },
+  {
+    id: 'patterns',
+    label: 'Patterns',
+    to: paths.patterns.build(),
+    group: 'work',
+    summary:
+      'Upload trouser pattern pieces as SVG or DXF (ASTM D6673) with their nested size lines, then label each piece: grainline, hip, crotch and knee levels, lengthen/shorten lines, notches and seams.',
+    built: false,
+  },
+  {
+    id: 'fitPlanner',
+    label: 'Fit planner',
+    to: paths.fitPlanner.build(),
+    group: 'work',
+    summary:
+      'Compare your body measurements with the finished garment at waist, hip, thigh, knee, calf and hem, allowing for ease and the fabric’s stretch and shrinkage, and get a size per level with the reason for each suggested change.',
+    built: false,
+  },
+  {
+    id: 'fabrics',
+    label: 'Fabrics',
+    to: paths.fabrics.build(),
+    group: 'work',
+    summary:
+      'Keep a record of your cloths — width, crosswise stretch, shrinkage after washing — so plans and fabric-length estimates take the real cloth into account.',
+    built: false,
+  },
+  {
+    id: 'library',
+    label: 'Shared library',
+    to: paths.library.build(),
+    group: 'together',
+    summary:
+      'Patterns that sewists and coaches have chosen to share with everyone here, ready to start a make from.',
+    built: false,
+  },
+  {
+    id: 'coaching',
+    label: 'Coaching',
+    to: paths.coaching.build(),
+    group: 'together',
+    roles: coachRoles,
+    summary:
+      'Your classes and the makes you are invited to: review pieces, leave comments pinned to a spot, propose alteration revisions and publish patterns to a class library.',
+    built: false,
+  },
+  {
+    id: 'adminUsers',
+    label: 'Users',
+    to: paths.adminUsers.build(),
+    group: 'admin',
+    roles: adminRoles,
+    summary: 'Every account on this Blockwright, with the role each one holds.',
+    built: true,
+  },
+  {
+    id: 'adminOutbox',
+    label: 'Outbox',
+    to: paths.adminOutbox.build(),
+    group: 'admin',
+    roles: adminRoles,
+    summary: 'The e-mails the built-in test mail server has kept, such as password-reset links.',
+    built: true,
+  },
+  {
+    id: 'account',
+    label: 'Account',
+    to: paths.account.build(),
+    group: 'self',
+    summary: 'Your display name and password.',
+    built: true,
+  },
+];
+
+function canEnter(area: Pick<Area, 'roles'>, role: Role): boolean {
+  return !area.roles || area.roles.includes(role);
+}
+
+export function areasFor(role: Role): Area[] {
+  return areas.filter((area) => canEnter(area, role));
+}
+
+export function areaById(id: AreaId): Area {
+  const area = areas.find((each) => each.id === id);
+  if (!area) throw new Error(`No area named ${id}`);
+  return area;
+}
+
+export const groupLabels: Record<AreaGroup, string> = {
+  work: 'Your work',
+  together: 'Together',
+  admin: 'Admin',
+  self: 'You',
+};

@@ -1,0 +1,14 @@
+import { useMutation } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { userResponseSchema, type User } from '../../../types/api';
+import { accountKeys } from '../query-keys';
+
+export type UpdateAccountInput = { displayName: string };
+
+export async function updateAccount(input: UpdateAccountInput): Promise<User> {
+  const { user } = await apiClient.patch('/account', input, userResponseSchema);
+  return user;
+}
+
+export const useUpdateAccount = ({ onSuccess }: { onSuccess?: (user: User) => void } = {}) =>
+  useMutation({ mutationKey: accountKeys.updateProfile(), mutationFn: updateAccount, onSuccess });

@@ -1,0 +1,4 @@
+/** Join class names, skipping empty ones. */
+export function cx(...classes: Array<string | false | null | undefined>): string {
+  return classes.filter(Boolean).join(' ');
+}
