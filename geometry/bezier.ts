@@ -1,0 +1,390 @@
+/**
+ * Cubic and quadratic Bézier curves. `t` is always the curve parameter in [0, 1];
+ * `length` is always arc length in mm.
+ */
+import { FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
+import { type Point, vecCross, vecDistance, vecDot, vecLength, vecLerp, vecSub } from './vec.ts';
+
+/** A cubic Bézier: start, first control, second control, end. */
+export type Cubic = readonly [Point, Point, Point, Point];
+/** A quadratic Bézier: start, control, end. */
+export type Quadratic = readonly [Point, Point, Point];
+
+export function cubicPoint(c: Cubic, t: number): Point {
+  const mt = 1 - t;
+  const a = mt * mt * mt;
+  const b = 3 * mt * mt * t;
+  const d = 3 * mt * t * t;
+  const e = t * t * t;
+  return {
+    x: a * c[0].x + b * c[1].x + d * c[2].x + e * c[3].x,
+    y: a * c[0].y + b * c[1].y + d * c[2].y + e * c[3].y,
+  };
+}
+
+/** First derivative dB/dt (mm per unit t). */
+export function cubicDerivative(c: Cubic, t: number): Point {
+  const mt = 1 - t;
+  const a = 3 * mt * mt;
+  const b = 6 * mt * t;
+  const d = 3 * t * t;
+  return {
+    x: a * (c[1].x - c[0].x) + b * (c[2].x - c[1].x) + d * (c[3].x - c[2].x),
+    y: a * (c[1].y - c[0].y) + b * (c[2].y - c[1].y) + d * (c[3].y - c[2].y),
+  };
+}
+
+/**
+ * Unit tangent at t. Degenerate: where the derivative vanishes (a control point on an end
+ * point) the direction is taken a little inside the curve, then from the chord; a curve
+ * collapsed to a point returns {0, 0}.
+ */
+export function cubicTangent(c: Cubic, t: number): Point {
+  let d = cubicDerivative(c, t);
+  if (vecLength(d) < POINT_EPSILON) d = cubicDerivative(c, t < 0.5 ? t + 1e-6 : t - 1e-6);
+  if (vecLength(d) < POINT_EPSILON) d = vecSub(c[3], c[0]);
+  const l = vecLength(d);
+  return l < POINT_EPSILON ? { x: 0, y: 0 } : { x: d.x / l, y: d.y / l };
+}
+
+/** Split at t by de Casteljau; the two halves share the split point exactly. */
+export function cubicSplit(c: Cubic, t: number): [Cubic, Cubic] {
+  const p01 = vecLerp(c[0], c[1], t);
+  const p12 = vecLerp(c[1], c[2], t);
+  const p23 = vecLerp(c[2], c[3], t);
+  const p012 = vecLerp(p01, p12, t);
+  const p123 = vecLerp(p12, p23, t);
+  const m = vecLerp(p012, p123, t);
+  return [
+    [c[0], p01, p012, m],
+    [m, p123, p23, c[3]],
+  ];
+}
+
+/** The part of the curve between t0 and t1 (t0 < t1 expected; swapped otherwise). */
+export function cubicSlice(c: Cubic, t0: number, t1: number): Cubic {
+  if (t0 > t1) [t0, t1] = [t1, t0];
+  let right: Cubic = c;
+  if (t0 > 0) right = cubicSplit(c, t0)[1];
+  if (t1 >= 1) return right;
+  const local = t0 >= 1 ? 0 : (t1 - t0) / (1 - t0);
+  return cubicSplit(right, local)[0];
+}
+
+/** Exact degree elevation of a quadratic to a cubic. */
+export function quadraticToCubic(q: Quadratic): Cubic {
+  return [q[0], vecLerp(q[0], q[1], 2 / 3), vecLerp(q[2], q[1], 2 / 3), q[2]];
+}
+
+export function quadraticPoint(q: Quadratic, t: number): Point {
+  const mt = 1 - t;
+  return {
+    x: mt * mt * q[0].x + 2 * mt * t * q[1].x + t * t * q[2].x,
+    y: mt * mt * q[0].y + 2 * mt * t * q[1].y + t * t * q[2].y,
+  };
+}
+
+/** A straight line as a cubic (controls at thirds, so t is proportional to arc length). */
+export function lineToCubic(a: Point, b: Point): Cubic {
+  return [a, vecLerp(a, b, 1 / 3), vecLerp(a, b, 2 / 3), b];
+}
+
+// 8-point Gauss–Legendre nodes and weights on [−1, 1].
+const GL_X = [
+  -0.9602898564975363, -0.7966664774136267, -0.525532409916329, -0.1834346424956498, 0.1834346424956498,
+  0.525532409916329, 0.7966664774136267, 0.9602898564975363,
+];
+const GL_W = [
+  0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.362683783378362, 0.362683783378362,
+  0.3137066458778873, 0.2223810344533745, 0.1012285362903763,
+];
+
+function speedIntegral(c: Cubic, t0: number, t1: number): number {
+  const h = (t1 - t0) / 2;
+  const m = (t1 + t0) / 2;
+  let s = 0;
+  for (let i = 0; i < 8; i++) s += GL_W[i]! * vecLength(cubicDerivative(c, m + h * GL_X[i]!));
+  return s * h;
+}
+
+function adaptiveLength(c: Cubic, t0: number, t1: number, whole: number, tol: number, depth: number): number {
+  const m = (t0 + t1) / 2;
+  const left = speedIntegral(c, t0, m);
+  const right = speedIntegral(c, m, t1);
+  // Depth 14 bounds the work (≤ 16 384 pieces) even for curves no rule integrates well
+  // (subnormal or wildly uneven control points); the relative floor stops chasing round-off.
+  if (depth >= 14 || Math.abs(left + right - whole) <= Math.max(tol, 1e-13 * Math.abs(whole))) return left + right;
+  return adaptiveLength(c, t0, m, left, tol / 2, depth + 1) + adaptiveLength(c, m, t1, right, tol / 2, depth + 1);
+}
+
+/**
+ * Arc length between t0 and t1 by adaptive 8-point Gauss–Legendre quadrature, to an absolute
+ * error of about `tolerance` mm. Degenerate: a curve collapsed to a point has length 0; cusps
+ * are handled by the adaptive subdivision.
+ */
+export function cubicLength(c: Cubic, tolerance = LENGTH_TOLERANCE, t0 = 0, t1 = 1): number {
+  if (t1 <= t0) return 0;
+  // The speed |B'| is smooth except where B' vanishes (a cusp); such places are minima of
+  // |B'|², i.e. roots of B'·B''. Splitting there keeps every quadrature piece smooth.
+  const breaks = [t0, ...speedMinima(c).filter((t) => t > t0 && t < t1).sort((a, b) => a - b), t1];
+  let sum = 0;
+  for (let i = 1; i < breaks.length; i++) {
+    const a = breaks[i - 1]!;
+    const b = breaks[i]!;
+    const m = (a + b) / 2;
+    const tol = (tolerance * (b - a)) / (t1 - t0) / 2;
+    sum += adaptiveLength(c, a, m, speedIntegral(c, a, m), tol, 1) + adaptiveLength(c, m, b, speedIntegral(c, m, b), tol, 1);
+  }
+  return sum;
+}
+
+/** Parameters in (0, 1) where the speed |B'(t)| has a stationary point (roots of B'·B''). */
+function speedMinima(c: Cubic): number[] {
+  const a = vecSub(c[1], c[0]);
+  const b = vecSub(c[2], c[1]);
+  const cc = vecSub(c[3], c[2]);
+  const A = { x: a.x - 2 * b.x + cc.x, y: a.y - 2 * b.y + cc.y };
+  const B = { x: 2 * (b.x - a.x), y: 2 * (b.y - a.y) };
+  const C = a;
+  return solveCubic(2 * vecDot(A, A), 3 * vecDot(A, B), vecDot(B, B) + 2 * vecDot(A, C), vecDot(B, C)).filter(
+    (t) => t > PARAM_EPSILON && t < 1 - PARAM_EPSILON,
+  );
+}
+
+/**
+ * The parameter t at which the arc length from t = 0 equals `length`. Lengths ≤ 0 give 0 and
+ * lengths beyond the curve give 1. Newton steps guarded by bisection; error ≤ `tolerance` mm.
+ */
+export function cubicTimeAtLength(c: Cubic, length: number, tolerance = LENGTH_TOLERANCE): number {
+  if (length <= 0) return 0;
+  const total = cubicLength(c, tolerance);
+  if (length >= total) return 1;
+  let lo = 0;
+  let hi = 1;
+  let t = length / total;
+  for (let i = 0; i < 60; i++) {
+    const f = cubicLength(c, tolerance / 4, 0, t) - length;
+    if (Math.abs(f) <= tolerance) return t;
+    if (f > 0) hi = t;
+    else lo = t;
+    const speed = vecLength(cubicDerivative(c, t));
+    let next = speed > POINT_EPSILON ? t - f / speed : (lo + hi) / 2;
+    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    t = next;
+  }
+  return t;
+}
+
+function distanceToSegment(p: Point, a: Point, b: Point): number {
+  const ab = vecSub(b, a);
+  const l2 = vecDot(ab, ab);
+  if (l2 < POINT_EPSILON * POINT_EPSILON) return vecDistance(p, a);
+  const k = Math.max(0, Math.min(1, vecDot(vecSub(p, a), ab) / l2));
+  return vecDistance(p, { x: a.x + ab.x * k, y: a.y + ab.y * k });
+}
+
+/** Largest distance of the control points from the chord: bounds the curve's distance from it. */
+export function cubicFlatness(c: Cubic): number {
+  return Math.max(distanceToSegment(c[1], c[0], c[3]), distanceToSegment(c[2], c[0], c[3]));
+}
+
+/** True when the cubic is a straight segment (controls on the chord, within `tolerance`). */
+export function cubicIsStraight(c: Cubic, tolerance = POINT_EPSILON): boolean {
+  return cubicFlatness(c) <= tolerance;
+}
+
+/**
+ * Flatten to a polyline whose distance from the curve is at most `tolerance` (mm), by
+ * adaptive subdivision (the convex-hull bound), never a fixed count. Returns the parameters
+ * t of the polyline vertices, starting with 0 and ending with 1.
+ */
+export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
+  const out = [0];
+  const recurse = (part: Cubic, t0: number, t1: number, depth: number): void => {
+    if (depth >= 20 || cubicFlatness(part) <= tolerance) {
+      out.push(t1);
+      return;
+    }
+    const [l, r] = cubicSplit(part, 0.5);
+    const tm = (t0 + t1) / 2;
+    recurse(l, t0, tm, depth + 1);
+    recurse(r, tm, t1, depth + 1);
+  };
+  recurse(c, 0, 1, 0);
+  return out;
+}
+
+/** The polyline of cubicFlattenTimes as points (first = c[0], last = c[3]). */
+export function cubicFlatten(c: Cubic, tolerance = FLATNESS): Point[] {
+  const ts = cubicFlattenTimes(c, tolerance);
+  return ts.map((t) => (t === 0 ? c[0] : t === 1 ? c[3] : cubicPoint(c, t)));
+}
+
+/** Real roots of a·x² + b·x + c = 0 (degenerate lower degrees handled; all-zero gives []). */
+export function solveQuadratic(a: number, b: number, c: number): number[] {
+  const scale = Math.max(Math.abs(a), Math.abs(b), Math.abs(c));
+  if (scale === 0) return [];
+  if (Math.abs(a) < 1e-12 * scale) return Math.abs(b) < 1e-12 * scale ? [] : [-c / b];
+  const disc = b * b - 4 * a * c;
+  if (disc < 0) {
+    if (disc > -1e-12 * b * b) return [-b / (2 * a)];
+    return [];
+  }
+  const sq = Math.sqrt(disc);
+  const q = -0.5 * (b + (b >= 0 ? sq : -sq));
+  const r1 = q / a;
+  const r2 = q !== 0 ? c / q : -b / (2 * a);
+  return r1 === r2 ? [r1] : [r1, r2];
+}
+
+/** Real roots of a·x³ + b·x² + c·x + d = 0 (falls back to quadratic when a ≈ 0). */
+export function solveCubic(a: number, b: number, c: number, d: number): number[] {
+  const scale = Math.max(Math.abs(a), Math.abs(b), Math.abs(c), Math.abs(d));
+  if (scale === 0) return [];
+  if (Math.abs(a) < 1e-12 * scale) return solveQuadratic(b, c, d);
+  const A = b / a;
+  const B = c / a;
+  const C = d / a;
+  const Q = (A * A - 3 * B) / 9;
+  const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
+  const roots: number[] = [];
+  if (R * R < Q * Q * Q) {
+    const th = Math.acos(Math.max(-1, Math.min(1, R / Math.sqrt(Q * Q * Q))));
+    const m = -2 * Math.sqrt(Q);
+    roots.push(m * Math.cos(th / 3) - A / 3, m * Math.cos((th + 2 * Math.PI) / 3) - A / 3, m * Math.cos((th - 2 * Math.PI) / 3) - A / 3);
+  } else {
+    const s = -Math.sign(R) * Math.cbrt(Math.abs(R) + Math.sqrt(R * R - Q * Q * Q));
+    const u = s === 0 ? 0 : Q / s;
+    roots.push(s + u - A / 3);
+  }
+  // Newton polish: the closed form loses accuracy at multiple roots (a triple root is only
+  // found to ~1e-5·scale^(1/3)); Newton converges there too, linearly, so iterate while |f| falls.
+  return roots.map((x) => {
+    let fx = ((a * x + b) * x + c) * x + d;
+    for (let i = 0; i < 60 && fx !== 0; i++) {
+      const df = (3 * a * x + 2 * b) * x + c;
+      if (df === 0) break;
+      const nx = x - fx / df;
+      const nf = ((a * nx + b) * nx + c) * nx + d;
+      if (!(Math.abs(nf) < Math.abs(fx))) break;
+      x = nx;
+      fx = nf;
+    }
+    return x;
+  });
+}
+
+/**
+ * Parameters t in [0, 1] where the cubic meets the infinite line through `origin` with
+ * direction `direction`, sorted. Degenerate: a zero direction gives []; a cubic lying on the
+ * line gives [] (no transversal crossing).
+ */
+export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
+  if (vecLength(direction) < POINT_EPSILON) return [];
+  const dl = vecLength(direction);
+  const n = { x: -direction.y / dl, y: direction.x / dl };
+  const s = c.map((p) => n.x * (p.x - origin.x) + n.y * (p.y - origin.y));
+  const [s0, s1, s2, s3] = s as [number, number, number, number];
+  if (Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3)) < POINT_EPSILON) return [];
+  // Bernstein → power basis.
+  const a = -s0 + 3 * s1 - 3 * s2 + s3;
+  const b = 3 * s0 - 6 * s1 + 3 * s2;
+  const cc = -3 * s0 + 3 * s1;
+  const d = s0;
+  const roots = solveCubic(a, b, cc, d)
+    .filter((t) => t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON)
+    .map((t) => Math.min(1, Math.max(0, t)))
+    .sort((x, y) => x - y);
+  const unique: number[] = [];
+  for (const t of roots) if (unique.length === 0 || t - unique[unique.length - 1]! > PARAM_EPSILON * 10) unique.push(t);
+  return unique;
+}
+
+/**
+ * Signed area contribution ½∫(x dy − y dx) of the curve (mm²). Summed over a closed contour
+ * it is the enclosed signed area. The integrand is a degree-5 polynomial, so 3-point
+ * Gauss–Legendre is exact.
+ */
+export function cubicAreaContribution(c: Cubic): number {
+  const xs = [-0.7745966692414834, 0, 0.7745966692414834];
+  const ws = [5 / 9, 8 / 9, 5 / 9];
+  let s = 0;
+  for (let i = 0; i < 3; i++) {
+    const t = 0.5 + 0.5 * xs[i]!;
+    const p = cubicPoint(c, t);
+    const d = cubicDerivative(c, t);
+    s += ws[i]! * (p.x * d.y - p.y * d.x);
+  }
+  return 0.25 * s; // ½ (outer) × ½ (interval [0,1] Jacobian)
+}
+
+/** Tight axis-aligned bounds from the derivative's roots. */
+export function cubicBounds(c: Cubic): { minX: number; minY: number; maxX: number; maxY: number } {
+  const ts = [0, 1];
+  for (const axis of ['x', 'y'] as const) {
+    const p0 = c[0][axis];
+    const p1 = c[1][axis];
+    const p2 = c[2][axis];
+    const p3 = c[3][axis];
+    const a = 3 * (-p0 + 3 * p1 - 3 * p2 + p3);
+    const b = 6 * (p0 - 2 * p1 + p2);
+    const cc = 3 * (p1 - p0);
+    for (const t of solveQuadratic(a, b, cc)) if (t > 0 && t < 1) ts.push(t);
+  }
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const t of ts) {
+    const p = cubicPoint(c, t);
+    minX = Math.min(minX, p.x);
+    minY = Math.min(minY, p.y);
+    maxX = Math.max(maxX, p.x);
+    maxY = Math.max(maxY, p.y);
+  }
+  return { minX, minY, maxX, maxY };
+}
+
+/**
+ * Parameter of the point on the curve nearest to p (coarse sampling, then Newton refinement).
+ * Degenerate: ties resolve to the smaller t.
+ */
+export function cubicNearestTime(c: Cubic, p: Point): number {
+  let best = 0;
+  let bestD = Infinity;
+  const n = 32;
+  for (let i = 0; i <= n; i++) {
+    const t = i / n;
+    const d = vecDistance(cubicPoint(c, t), p);
+    if (d < bestD) {
+      bestD = d;
+      best = t;
+    }
+  }
+  let t = best;
+  for (let i = 0; i < 20; i++) {
+    const q = cubicPoint(c, t);
+    const d1 = cubicDerivative(c, t);
+    const mt = 1 - t;
+    const d2 = {
+      x: 6 * mt * (c[2].x - 2 * c[1].x + c[0].x) + 6 * t * (c[3].x - 2 * c[2].x + c[1].x),
+      y: 6 * mt * (c[2].y - 2 * c[1].y + c[0].y) + 6 * t * (c[3].y - 2 * c[2].y + c[1].y),
+    };
+    const diff = vecSub(q, p);
+    const num = vecDot(diff, d1);
+    const den = vecDot(d1, d1) + vecDot(diff, d2);
+    if (Math.abs(den) < 1e-18) break;
+    const next = Math.min(1, Math.max(0, t - num / den));
+    if (Math.abs(next - t) < PARAM_EPSILON) {
+      t = next;
+      break;
+    }
+    t = next;
+  }
+  return vecDistance(cubicPoint(c, t), p) <= bestD ? t : best;
+}
+
+/** Winding-independent turn test used by callers: cross of the end tangents. */
+export function cubicEndTurn(c: Cubic): number {
+  return vecCross(cubicTangent(c, 0), cubicTangent(c, 1));
+}

@@ -1,0 +1,22 @@
+/**
+ * The only barrel of geometry/: the pure numeric core of Blockwright.
+ * Units: millimetres, y grows downward, angles in radians. See README.md.
+ */
+export * from './tolerance.ts';
+export * from './vec.ts';
+export * from './bezier.ts';
+export * from './path.ts';
+export * from './model.ts';
+export * from './demo-pattern.ts';
+export * from './measure.ts';
+export * from './ops/common.ts';
+export * from './ops/lengthen.ts';
+export * from './ops/blend.ts';
+export * from './ops/shrinkage.ts';
+export * from './ops/apply.ts';
+export * from './ops/seam-allowance.ts';
+export * from './ops/girth.ts';
+export * from './ops/slash-spread.ts';
+export * from './xml.ts';
+export * from './svg-import.ts';
+export * from './dxf-import.ts';

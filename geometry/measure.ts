@@ -1,0 +1,187 @@
+/**
+ * Measurements of a pattern: named edges, widths at levels, paired seams and crotch length.
+ * All lengths are arc lengths in mm along the outline (the seam line unless seam allowance is
+ * included in the outline).
+ */
+import { type Edge, type EdgeRole, type Outline, type Pattern, type Piece, landmarkOf, outlineContour } from './model.ts';
+import { type Contour, contourArea, contourFlatten, contourLength, contourLineIntersections, contourNearest, contourStretch, pathFromSvg } from './path.ts';
+import { PAIRED_SEAM_TOLERANCE } from './tolerance.ts';
+import { type Point, vecDistance, vecDot, vecNormalize, vecSub } from './vec.ts';
+
+/** Thrown when something to measure is missing (an edge's landmark, a level line). */
+export class MeasureError extends Error {
+  override readonly name = 'MeasureError';
+}
+
+/** The stretch of the outline that an edge names, in drawing direction. */
+export function edgeContour(outline: Outline, edge: Edge): Contour {
+  const contour = outlineContour(outline);
+  const a = landmarkOf(outline, edge.from);
+  const b = landmarkOf(outline, edge.to);
+  if (!a || !b) throw new MeasureError(`edge "${edge.name}" needs landmarks "${edge.from}" and "${edge.to}" in size "${outline.size}"`);
+  return contourStretch(contour, contourNearest(contour, a), contourNearest(contour, b));
+}
+
+export interface EdgeMeasure {
+  readonly name: string;
+  readonly role: EdgeRole;
+  readonly length: number;
+}
+
+export interface OutlineMeasure {
+  readonly size: string;
+  /** Enclosed area (mm²). */
+  readonly area: number;
+  readonly perimeter: number;
+  readonly edges: readonly EdgeMeasure[];
+  /** Centre front/back seam of this piece: its centre-front, centre-back and crotch-curve edges (mm). */
+  readonly crotchSeam: number;
+}
+
+export interface PieceMeasure {
+  readonly piece: string;
+  readonly outlines: readonly OutlineMeasure[];
+}
+
+const CROTCH_ROLES: readonly EdgeRole[] = ['centre-front', 'centre-back', 'crotch-curve'];
+
+export function measureOutline(piece: Piece, outline: Outline): OutlineMeasure {
+  const contour = outlineContour(outline);
+  const edges = piece.edges.map((e) => ({ name: e.name, role: e.role, length: contourLength(edgeContour(outline, e)) }));
+  return {
+    size: outline.size,
+    area: contourArea(contour),
+    perimeter: contourLength(contour),
+    edges,
+    crotchSeam: edges.filter((e) => CROTCH_ROLES.includes(e.role)).reduce((s, e) => s + e.length, 0),
+  };
+}
+
+export function measurePiece(piece: Piece): PieceMeasure {
+  return { piece: piece.name, outlines: piece.outlines.map((o) => measureOutline(piece, o)) };
+}
+
+export function measurePattern(pattern: Pattern): PieceMeasure[] {
+  return pattern.pieces.map(measurePiece);
+}
+
+/** Length of the first edge with this role (or name) in one size; undefined when the piece has none. */
+export function edgeLength(piece: Piece, size: string, roleOrName: string): number | undefined {
+  const outline = piece.outlines.find((o) => o.size === size);
+  if (!outline) throw new MeasureError(`piece "${piece.name}" has no size "${size}"`);
+  const edge = piece.edges.find((e) => e.name === roleOrName) ?? piece.edges.find((e) => e.role === roleOrName);
+  return edge ? contourLength(edgeContour(outline, edge)) : undefined;
+}
+
+/**
+ * Width of an outline along a line (mm): the total length of the line lying inside the
+ * outline (even–odd), so a piece the line crosses twice gives the distance between the two
+ * crossings. A line that misses the outline gives 0.
+ */
+export function widthAlongLine(outline: Outline, origin: Point, direction: Point): number {
+  const contour = outlineContour(outline);
+  const dir = vecNormalize(direction);
+  const hits = contourLineIntersections(contour, origin, dir)
+    .map((h) => vecDot(vecSub(h.point, origin), dir))
+    .sort((a, b) => a - b);
+  let w = 0;
+  for (let i = 0; i + 1 < hits.length; i += 2) w += hits[i + 1]! - hits[i]!;
+  return w;
+}
+
+/**
+ * Width of a piece's outline at a named level line (role "level"; a line for that size if
+ * there is one, else the piece-level line). Throws MeasureError when the level is missing.
+ */
+export function widthAtLevel(piece: Piece, size: string, level: string): number {
+  const outline = piece.outlines.find((o) => o.size === size);
+  if (!outline) throw new MeasureError(`piece "${piece.name}" has no size "${size}"`);
+  const line =
+    piece.lines.find((l) => l.role === 'level' && l.name === level && l.size === size) ??
+    piece.lines.find((l) => l.role === 'level' && l.name === level && l.size === undefined);
+  if (!line) throw new MeasureError(`piece "${piece.name}" has no level line "${level}" for size "${size}"`);
+  const segs = pathFromSvg(line.d).flatMap((c) => c.segments);
+  const a = segs[0]!.from;
+  const b = segs[segs.length - 1]!.to;
+  return widthAlongLine(outline, a, vecSub(b, a));
+}
+
+export interface PairedSeam {
+  readonly size: string;
+  readonly role: EdgeRole;
+  readonly first: { readonly piece: string; readonly length: number };
+  readonly second: { readonly piece: string; readonly length: number };
+  /** first − second (mm). */
+  readonly difference: number;
+  readonly withinTolerance: boolean;
+}
+
+/**
+ * Compare the seams that are sewn together: for each size the two pieces share, the edges
+ * with each role (default inseam and side seam). `tolerance` defaults to
+ * PAIRED_SEAM_TOLERANCE (trade reference §3.11, common practice).
+ */
+export function pairedSeamReport(
+  pattern: Pattern,
+  options: { first?: string; second?: string; roles?: readonly EdgeRole[]; tolerance?: number } = {},
+): PairedSeam[] {
+  const first = pattern.pieces.find((p) => p.name === (options.first ?? 'front'));
+  const second = pattern.pieces.find((p) => p.name === (options.second ?? 'back'));
+  if (!first || !second) throw new MeasureError(`paired-seam report needs pieces "${options.first ?? 'front'}" and "${options.second ?? 'back'}"`);
+  const roles = options.roles ?? (['inseam', 'side-seam'] as const);
+  const tol = options.tolerance ?? PAIRED_SEAM_TOLERANCE;
+  const out: PairedSeam[] = [];
+  for (const o of first.outlines) {
+    if (!second.outlines.some((q) => q.size === o.size)) continue;
+    for (const role of roles) {
+      const a = edgeLength(first, o.size, role);
+      const b = edgeLength(second, o.size, role);
+      if (a === undefined || b === undefined) continue;
+      out.push({ size: o.size, role, first: { piece: first.name, length: a }, second: { piece: second.name, length: b }, difference: a - b, withinTolerance: Math.abs(a - b) <= tol });
+    }
+  }
+  return out;
+}
+
+/** Total crotch length per size: the centre-front, centre-back and crotch-curve edges of every piece (front + back, and a yoke's centre back). */
+export function crotchLength(pattern: Pattern): { size: string; front: number; back: number; total: number }[] {
+  const sizes = new Map<string, { front: number; back: number }>();
+  for (const piece of pattern.pieces) {
+    for (const o of piece.outlines) {
+      const m = measureOutline(piece, o);
+      const entry = sizes.get(o.size) ?? { front: 0, back: 0 };
+      for (const e of m.edges) {
+        if (e.role === 'centre-back') entry.back += e.length;
+        else if (e.role === 'centre-front') entry.front += e.length;
+        else if (e.role === 'crotch-curve') {
+          if (piece.edges.some((x) => x.role === 'centre-back')) entry.back += e.length;
+          else entry.front += e.length;
+        }
+      }
+      sizes.set(o.size, entry);
+    }
+  }
+  return [...sizes.entries()].filter(([, v]) => v.front + v.back > 0).map(([size, v]) => ({ size, front: v.front, back: v.back, total: v.front + v.back }));
+}
+
+/** Extent of an outline along a direction (mm): the piece's length along the grain for the grain direction. */
+export function extentAlong(outline: Outline, direction: Point): number {
+  const d = vecNormalize(direction);
+  let min = Infinity;
+  let max = -Infinity;
+  for (const f of contourFlatten(outlineContour(outline), 1e-4)) {
+    const v = vecDot(f.point, d);
+    min = Math.min(min, v);
+    max = Math.max(max, v);
+  }
+  return max - min;
+}
+
+/** Distance between two landmarks of an outline in a straight line (mm). */
+export function landmarkDistance(outline: Outline, a: string, b: string): number {
+  const p = landmarkOf(outline, a);
+  const q = landmarkOf(outline, b);
+  if (!p || !q) throw new MeasureError(`size "${outline.size}" lacks landmark "${p ? b : a}"`);
+  return vecDistance(p, q);
+}
+

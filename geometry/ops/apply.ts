@@ -1,0 +1,72 @@
+/**
+ * Alterations as data: a zod discriminated union on `op`, one pure `perform` per operation,
+ * and `applyOps` to replay an ordered list. Inputs are never changed; a refused operation
+ * throws AlterationError naming the operation's position, and nothing is half-applied.
+ */
+import { z } from 'zod';
+import type { Pattern } from '../model.ts';
+import { type BlendOp, blendOpSchema, performBlend } from './blend.ts';
+import { AlterationError, type Caution, type OpResult } from './common.ts';
+import { type GirthOp, girthOpSchema, performGirth } from './girth.ts';
+import { type LengthenOp, type RiseOp, lengthenOpSchema, performLengthen, performRise, riseOpSchema } from './lengthen.ts';
+import { type SeamAllowanceOp, performSeamAllowance, seamAllowanceOpSchema } from './seam-allowance.ts';
+import { type SlashSpreadOp, performSlashSpread, slashSpreadOpSchema } from './slash-spread.ts';
+import { type ShrinkageOp, performShrinkage, shrinkageOpSchema } from './shrinkage.ts';
+
+export const alterationOpSchema = z.discriminatedUnion('op', [lengthenOpSchema, riseOpSchema, blendOpSchema, shrinkageOpSchema, seamAllowanceOpSchema, girthOpSchema, slashSpreadOpSchema]);
+export type AlterationOp = z.input<typeof alterationOpSchema>;
+
+/** The ops file of the command line: `{ "ops": [ … ] }`. */
+export const alterationListSchema = z.object({ ops: z.array(alterationOpSchema).max(500) });
+
+/** Perform one operation (already validated or not: it is parsed here). */
+export function performOp(pattern: Pattern, input: AlterationOp): OpResult {
+  const op = alterationOpSchema.parse(input);
+  switch (op.op) {
+    case 'lengthen':
+      return performLengthen(pattern, op as LengthenOp);
+    case 'rise':
+      return performRise(pattern, op as RiseOp);
+    case 'blend':
+      return performBlend(pattern, op as BlendOp);
+    case 'shrinkage':
+      return performShrinkage(pattern, op as ShrinkageOp);
+    case 'slash-spread':
+      return performSlashSpread(pattern, op as SlashSpreadOp);
+    case 'girth':
+      return performGirth(pattern, op as GirthOp);
+    case 'seam-allowance':
+      return performSeamAllowance(pattern, op as SeamAllowanceOp);
+  }
+}
+
+export interface AppliedCaution extends Caution {
+  /** Position of the operation in the list (0-based). */
+  readonly op: number;
+}
+
+/**
+ * Replay operations in order. Throws AlterationError (with the operation's position and kind
+ * in the message) for the first operation that is refused or malformed.
+ */
+export function applyOps(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; cautions: AppliedCaution[] } {
+  let current = pattern;
+  const cautions: AppliedCaution[] = [];
+  ops.forEach((raw, index) => {
+    const parsed = alterationOpSchema.safeParse(raw);
+    const kind = typeof raw === 'object' && raw !== null && 'op' in raw ? String((raw as { op: unknown }).op) : 'unknown';
+    if (!parsed.success) {
+      const issue = parsed.error.issues[0]!;
+      throw new AlterationError('bad-amount', `operation ${index + 1} (${kind}): ${issue.path.join('.') || 'op'}: ${issue.message}`);
+    }
+    try {
+      const r = performOp(current, parsed.data);
+      current = r.pattern;
+      for (const c of r.cautions) cautions.push({ ...c, op: index });
+    } catch (error) {
+      if (error instanceof AlterationError) throw new AlterationError(error.code, `operation ${index + 1} (${kind}): ${error.message}`, error.where);
+      throw error;
+    }
+  });
+  return { pattern: current, cautions };
+}

@@ -1,0 +1,289 @@
+/**
+ * Shared machinery of the alteration operations: results, cautions, errors, the grain frame
+ * of a piece, and piecewise-affine deformations of a whole piece.
+ */
+import {
+  type Contour,
+  type Path,
+  contourFlatten,
+  contourSelfCrossings,
+  pathFromSvg,
+  pathToSvg,
+  segmentLineIntersections,
+  segmentSplitAt,
+  segmentTransform,
+  segmentPoint,
+  lineSegment,
+  type Segment,
+} from '../path.ts';
+import { type Cubic, cubicPoint } from '../bezier.ts';
+import { SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
+import { type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, outlineContour, orderedOutlines } from '../model.ts';
+import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecNormalize, vecSub } from '../vec.ts';
+
+/** Something the person should know about a result (an estimate, a large change, …). */
+export interface Caution {
+  readonly code: 'extrapolated-size' | 'fractional-size' | 'large-change' | 'missing-level' | 'seam-allowance-included' | 'estimate';
+  readonly message: string;
+  readonly piece?: string;
+}
+
+export interface OpResult {
+  readonly pattern: Pattern;
+  readonly cautions: readonly Caution[];
+}
+
+export type AlterationErrorCode = 'missing-line' | 'missing-piece' | 'bad-amount' | 'fold' | 'no-correspondence' | 'bad-level' | 'bad-size';
+
+/** An operation refused: the pattern is returned unchanged by the caller; `message` says why. */
+export class AlterationError extends Error {
+  override readonly name = 'AlterationError';
+  constructor(
+    readonly code: AlterationErrorCode,
+    message: string,
+    readonly where?: Point,
+  ) {
+    super(message);
+  }
+}
+
+export const fmtMm = (v: number): string => `${Math.round(v * 100) / 100} mm`;
+export const fmtPt = (p: Point): string => `(${Math.round(p.x * 10) / 10}, ${Math.round(p.y * 10) / 10})`;
+
+/**
+ * The unit grain direction of a piece, pointing from the waist toward the hem.
+ * Taken from the first `grain` line (first to last point); without one, +y (pieces drawn
+ * upright). Oriented toward the hem edge when the piece names hem and waist edges, else so
+ * that it does not point up the page (y < 0).
+ */
+export function pieceGrain(piece: Piece): Point {
+  let g: Point = { x: 0, y: 1 };
+  const line = piece.lines.find((l) => l.role === 'grain');
+  if (line) {
+    const path = pathFromSvg(line.d);
+    const segs = path.flatMap((c) => c.segments);
+    if (segs.length > 0) {
+      const d = vecNormalize(vecSub(segs[segs.length - 1]!.to, segs[0]!.from));
+      if (d.x !== 0 || d.y !== 0) g = d;
+    }
+  }
+  const outline = piece.outlines[0]!;
+  const hem = piece.edges.find((e) => e.role === 'hem');
+  const top = piece.edges.find((e) => e.role === 'waist') ?? piece.edges.find((e) => e.role === 'other');
+  const hemPt = hem ? landmarkOf(outline, hem.from) : undefined;
+  const topPt = top ? landmarkOf(outline, top.from) : undefined;
+  if (hemPt && topPt) {
+    if (vecDot(vecSub(hemPt, topPt), g) < 0) g = { x: -g.x, y: -g.y };
+  } else if (g.y < 0 || (g.y === 0 && g.x < 0)) g = { x: -g.x, y: -g.y };
+  return g;
+}
+
+/** Range of the projection of an outline on a direction (by its flattening). */
+export function projectionRange(contour: Contour, direction: Point, origin: Point = { x: 0, y: 0 }): { min: number; max: number } {
+  let min = Infinity;
+  let max = -Infinity;
+  for (const f of contourFlatten(contour, 0.05)) {
+    const v = vecDot(vecSub(f.point, origin), direction);
+    min = Math.min(min, v);
+    max = Math.max(max, v);
+  }
+  return { min, max };
+}
+
+/** The affine map sending the three source points to the three destination points. */
+export function affineFromPoints(src: readonly [Point, Point, Point], dst: readonly [Point, Point, Point]): Affine {
+  const S: Affine = { a: src[1].x - src[0].x, b: src[1].y - src[0].y, c: src[2].x - src[0].x, d: src[2].y - src[0].y, e: src[0].x, f: src[0].y };
+  const D: Affine = { a: dst[1].x - dst[0].x, b: dst[1].y - dst[0].y, c: dst[2].x - dst[0].x, d: dst[2].y - dst[0].y, e: dst[0].x, f: dst[0].y };
+  return affineMultiply(D, affineInvert(S));
+}
+
+/**
+ * A piecewise-affine map of the plane: the plane is cut by parallel lines `origin + s·direction`
+ * at offsets `breaks` (measured with `coordinate`), and each band between cuts has its own
+ * affine map (`maps.length === breaks.length + 1`). Continuous when neighbouring maps agree on
+ * their shared cut line (the caller's duty). Lines and cubics inside one band map exactly.
+ */
+export interface BandMap {
+  /** Signed coordinate of a point across the cut lines (increasing across bands). */
+  readonly coordinate: (p: Point) => number;
+  /** A point on the cut line at coordinate b. */
+  readonly lineAt: (b: number) => Point;
+  readonly direction: Point;
+  readonly breaks: readonly number[];
+  readonly maps: readonly Affine[];
+}
+
+function bandIndex(m: BandMap, v: number): number {
+  let i = 0;
+  while (i < m.breaks.length && v > m.breaks[i]!) i++;
+  return i;
+}
+
+export function bandMapPoint(m: BandMap, p: Point): Point {
+  return affineApply(m.maps[bandIndex(m, m.coordinate(p))]!, p);
+}
+
+/** Split a segment at every cut line and map each part with its band's affine map (exact). */
+export function bandMapSegment(m: BandMap, s: Segment): Segment[] {
+  const ts: number[] = [];
+  for (const b of m.breaks) ts.push(...segmentLineIntersections(s, m.lineAt(b), m.direction));
+  return segmentSplitAt(s, ts).map((part) => segmentTransform(part, m.maps[bandIndex(m, m.coordinate(segmentPoint(part, 0.5)))]!));
+}
+
+/** Map a path; returns the very same path when every part lies in an identity band (nothing moves). */
+export function bandMapPath(m: BandMap, path: Path): Path {
+  const untouched = path.every((c) =>
+    c.segments.every((s) => {
+      for (const b of m.breaks) if (segmentLineIntersections(s, m.lineAt(b), m.direction).some((t) => t > 1e-9 && t < 1 - 1e-9)) return false;
+      return m.maps[bandIndex(m, m.coordinate(segmentPoint(s, 0.5)))] === AFFINE_IDENTITY;
+    }),
+  );
+  if (untouched) return path;
+  return path.map((c) => ({ closed: c.closed, segments: c.segments.flatMap((s) => bandMapSegment(m, s)) }));
+}
+
+/** Map path data; the same text comes back when the map returns the same path (nothing moved). */
+function mapD(d: string, pathMap: (p: Path) => Path): string {
+  const before = pathFromSvg(d);
+  const after = pathMap(before);
+  return after === before ? d : pathToSvg(after, 6);
+}
+
+/** Map an outline (its path, landmarks and cut line). */
+export function mapOutline(outline: Outline, pathMap: (p: Path) => Path, pointMap: (p: Point) => Point): Outline {
+  return {
+    ...outline,
+    d: mapD(outline.d, pathMap),
+    points: outline.points.map((lm) => ({ ...lm, ...roundPoint(pointMap(lm)) })),
+    ...(outline.cut !== undefined ? { cut: mapD(outline.cut, pathMap) } : {}),
+  };
+}
+
+function roundPoint(p: Point): Point {
+  return { x: Number(p.x.toFixed(6)), y: Number(p.y.toFixed(6)) };
+}
+
+export function mapLine(line: PatternLine, pathMap: (p: Path) => Path): PatternLine {
+  const d = mapD(line.d, pathMap);
+  return d === line.d ? line : { ...line, d };
+}
+
+/**
+ * Refuse an outline that is not closed and simple after an operation, naming where it
+ * crosses itself.
+ */
+export function assertSimple(contour: Contour, what: string): void {
+  if (!contour.closed) throw new AlterationError('fold', `${what}: the outline is no longer closed`);
+  const x = contourSelfCrossings(contour);
+  if (x.length > 0) throw new AlterationError('fold', `${what}: the outline would fold over itself near ${fmtPt(x[0]!.point)}`, x[0]!.point);
+}
+
+/** Check every outline of a pattern is closed and simple (see assertSimple). */
+export function assertPatternSimple(pattern: Pattern, what: string): void {
+  for (const piece of pattern.pieces) for (const o of piece.outlines) assertSimple(outlineContour(o), `${what}, piece "${piece.name}" size "${o.size}"`);
+}
+
+/** The middle outline of a piece in size order (for piece-level lines when sizes disagree). */
+export function middleOutline(piece: Piece): Outline {
+  const o = orderedOutlines(piece);
+  return o[Math.floor((o.length - 1) / 2)]!;
+}
+
+/** Cross of two unit vectors: sine of the angle between them. */
+export function sinBetween(a: Point, b: Point): number {
+  return vecCross(vecNormalize(a), vecNormalize(b));
+}
+
+/**
+ * Smooth cubic pieces through points: Hermite cubics with chord-length parabola tangents
+ * (ends use the 3-point one-sided derivative), merged greedily where one cubic passes within
+ * `mergeTolerance` mm of the points it spans.
+ */
+export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE_TOLERANCE): Segment[] {
+  const n = q.length - 1;
+  if (n < 1) return [];
+  if (n === 1) return [lineSegment(q[0]!, q[1]!)];
+  const h = Array.from({ length: n }, (_, k) => Math.max(vecDistance(q[k]!, q[k + 1]!), 1e-9));
+  const tangent = (k: number): Point => {
+    if (k === 0) {
+      const [h1, h2] = [h[0]!, h[1]!];
+      const a = -(2 * h1 + h2) / (h1 * (h1 + h2));
+      const b = (h1 + h2) / (h1 * h2);
+      const c = -h1 / (h2 * (h1 + h2));
+      return { x: a * q[0]!.x + b * q[1]!.x + c * q[2]!.x, y: a * q[0]!.y + b * q[1]!.y + c * q[2]!.y };
+    }
+    if (k === n) {
+      const [h1, h2] = [h[n - 1]!, h[n - 2]!];
+      const a = -(2 * h1 + h2) / (h1 * (h1 + h2));
+      const b = (h1 + h2) / (h1 * h2);
+      const c = -h1 / (h2 * (h1 + h2));
+      return { x: -(a * q[n]!.x + b * q[n - 1]!.x + c * q[n - 2]!.x), y: -(a * q[n]!.y + b * q[n - 1]!.y + c * q[n - 2]!.y) };
+    }
+    // derivative of the parabola through k−1, k, k+1 at k (chord-length parameter)
+    const [h0, h1] = [h[k - 1]!, h[k]!];
+    const a = -h1 / (h0 * (h0 + h1));
+    const b = (h1 - h0) / (h0 * h1);
+    const c = h0 / (h1 * (h0 + h1));
+    return { x: a * q[k - 1]!.x + b * q[k]!.x + c * q[k + 1]!.x, y: a * q[k - 1]!.y + b * q[k]!.y + c * q[k + 1]!.y };
+  };
+  const t = Array.from({ length: n + 1 }, (_, k) => tangent(k));
+  const hermite = (k: number, m: number, len: number): Segment => {
+    const a = q[k]!;
+    const b = q[m]!;
+    return { kind: 'cubic', from: a, c1: { x: a.x + (t[k]!.x * len) / 3, y: a.y + (t[k]!.y * len) / 3 }, c2: { x: b.x - (t[m]!.x * len) / 3, y: b.y - (t[m]!.y * len) / 3 }, to: b };
+  };
+  // Greedy merge: one cubic spans as many points as it passes within `mergeTolerance` of
+  // (checked at their chord-length parameters), so nearly straight or evenly curved runs
+  // become a few cubics instead of one per point.
+  const cum = [0];
+  for (let k = 0; k < n; k++) cum.push(cum[k]! + h[k]!);
+  const fits = (k: number, m: number): Segment | undefined => {
+    const len = cum[m]! - cum[k]!;
+    const seg = hermite(k, m, len);
+    const cubic: Cubic = [seg.from, (seg as { c1: Point }).c1, (seg as { c2: Point }).c2, seg.to];
+    for (let i = k + 1; i < m; i++) if (vecDistance(cubicPoint(cubic, (cum[i]! - cum[k]!) / len), q[i]!) > mergeTolerance) return undefined;
+    return seg;
+  };
+  const out: Segment[] = [];
+  let k = 0;
+  while (k < n) {
+    let best = k + 1;
+    let bestSeg = hermite(k, k + 1, h[k]!);
+    if (mergeTolerance > 0) {
+      // grow the span by doubling while it fits, then bisect between the last fit and the first miss
+      let step = 1;
+      let miss = -1;
+      while (true) {
+        const m = Math.min(n, k + 1 + step, k + MERGE_MAX_POINTS);
+        if (m <= best) break;
+        const seg = fits(k, m);
+        if (!seg) {
+          miss = m;
+          break;
+        }
+        best = m;
+        bestSeg = seg;
+        if (m === n || m === k + MERGE_MAX_POINTS) break;
+        step *= 2;
+      }
+      let lo = best;
+      let hi = miss;
+      while (hi > lo + 1) {
+        const mid = (lo + hi) >> 1;
+        const seg = fits(k, mid);
+        if (seg) {
+          lo = mid;
+          best = mid;
+          bestSeg = seg;
+        } else hi = mid;
+      }
+    }
+    out.push(bestSeg);
+    k = best;
+  }
+  return out;
+}
+
+/** The most points one merged cubic may span in smoothThrough. */
+const MERGE_MAX_POINTS = 256;
+

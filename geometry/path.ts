@@ -1,0 +1,715 @@
+/**
+ * The path model: contours made of line and cubic segments, read from and written to SVG
+ * path data. Quadratics become cubics exactly; elliptical arcs become cubics of at most 45°
+ * each (radial error ≤ 4.3e-6 × radius, i.e. < 0.005 mm for radii up to 1 m).
+ */
+import { SVGPathData } from 'svg-pathdata';
+import {
+  type Cubic,
+  cubicAreaContribution,
+  cubicBounds,
+  cubicDerivative,
+  cubicFlattenTimes,
+  cubicLength,
+  cubicLineIntersections,
+  cubicNearestTime,
+  cubicPoint,
+  cubicSlice,
+  cubicSplit,
+  cubicTangent,
+  cubicTimeAtLength,
+  quadraticToCubic,
+} from './bezier.ts';
+import { CLOSE_GAP, FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
+import {
+  type Affine,
+  type Point,
+  affineApply,
+  vecCross,
+  vecDistance,
+  vecDot,
+  vecLerp,
+  vecNormalize,
+  vecSub,
+} from './vec.ts';
+
+export type Segment =
+  | { readonly kind: 'line'; readonly from: Point; readonly to: Point }
+  | { readonly kind: 'cubic'; readonly from: Point; readonly c1: Point; readonly c2: Point; readonly to: Point };
+
+/** One sub-path. Consecutive segments share end points; a closed contour ends where it starts. */
+export interface Contour {
+  readonly segments: readonly Segment[];
+  readonly closed: boolean;
+}
+
+/** A whole path: one or more contours. */
+export type Path = readonly Contour[];
+
+/** Thrown for path data that cannot be read; `message` says what and where. */
+export class PathDataError extends Error {
+  override readonly name = 'PathDataError';
+}
+
+export function lineSegment(from: Point, to: Point): Segment {
+  return { kind: 'line', from, to };
+}
+
+export function cubicSegment(c: Cubic): Segment {
+  return { kind: 'cubic', from: c[0], c1: c[1], c2: c[2], to: c[3] };
+}
+
+/** The segment as a cubic (a line gets controls at its thirds). */
+export function segmentCubic(s: Segment): Cubic {
+  return s.kind === 'cubic' ? [s.from, s.c1, s.c2, s.to] : [s.from, vecLerp(s.from, s.to, 1 / 3), vecLerp(s.from, s.to, 2 / 3), s.to];
+}
+
+export function segmentPoint(s: Segment, t: number): Point {
+  return s.kind === 'line' ? vecLerp(s.from, s.to, t) : cubicPoint(segmentCubic(s), t);
+}
+
+/** Unit tangent at t (see cubicTangent for degenerate cases). */
+export function segmentTangent(s: Segment, t: number): Point {
+  return s.kind === 'line' ? vecNormalize(vecSub(s.to, s.from)) : cubicTangent(segmentCubic(s), t);
+}
+
+export function segmentLength(s: Segment, tolerance = LENGTH_TOLERANCE): number {
+  return s.kind === 'line' ? vecDistance(s.from, s.to) : cubicLength(segmentCubic(s), tolerance);
+}
+
+/** Split at t; the halves share the split point. */
+export function segmentSplit(s: Segment, t: number): [Segment, Segment] {
+  if (s.kind === 'line') {
+    const m = vecLerp(s.from, s.to, t);
+    return [lineSegment(s.from, m), lineSegment(m, s.to)];
+  }
+  const [a, b] = cubicSplit(segmentCubic(s), t);
+  return [cubicSegment(a), cubicSegment(b)];
+}
+
+/** The part between t0 and t1. */
+export function segmentSlice(s: Segment, t0: number, t1: number): Segment {
+  if (s.kind === 'line') return lineSegment(vecLerp(s.from, s.to, t0), vecLerp(s.from, s.to, t1));
+  return cubicSegment(cubicSlice(segmentCubic(s), t0, t1));
+}
+
+/**
+ * Split a segment at several parameters (any order; values within PARAM_EPSILON of each
+ * other, of 0 or of 1 are ignored). Returns the pieces in order.
+ */
+export function segmentSplitAt(s: Segment, ts: readonly number[]): Segment[] {
+  const cuts = [...ts].filter((t) => t > PARAM_EPSILON && t < 1 - PARAM_EPSILON).sort((a, b) => a - b);
+  const out: Segment[] = [];
+  let rest = s;
+  let done = 0;
+  for (const t of cuts) {
+    if (t - done <= PARAM_EPSILON) continue;
+    const local = (t - done) / (1 - done);
+    const [a, b] = segmentSplit(rest, local);
+    out.push(a);
+    rest = b;
+    done = t;
+  }
+  out.push(rest);
+  return out;
+}
+
+export function segmentReverse(s: Segment): Segment {
+  return s.kind === 'line' ? lineSegment(s.to, s.from) : { kind: 'cubic', from: s.to, c1: s.c2, c2: s.c1, to: s.from };
+}
+
+/** Apply an affine map (exact for lines and cubics). */
+export function segmentTransform(s: Segment, m: Affine): Segment {
+  return s.kind === 'line'
+    ? lineSegment(affineApply(m, s.from), affineApply(m, s.to))
+    : { kind: 'cubic', from: affineApply(m, s.from), c1: affineApply(m, s.c1), c2: affineApply(m, s.c2), to: affineApply(m, s.to) };
+}
+
+/** Apply any point map to the defining points (exact only for affine maps). */
+export function segmentMapPoints(s: Segment, f: (p: Point) => Point): Segment {
+  return s.kind === 'line' ? lineSegment(f(s.from), f(s.to)) : { kind: 'cubic', from: f(s.from), c1: f(s.c1), c2: f(s.c2), to: f(s.to) };
+}
+
+/** Parameters where the segment meets an infinite line, sorted. */
+export function segmentLineIntersections(s: Segment, origin: Point, direction: Point): number[] {
+  if (s.kind === 'line') {
+    const d = vecSub(s.to, s.from);
+    const den = vecCross(d, direction);
+    if (Math.abs(den) < 1e-12 * Math.max(1, Math.hypot(d.x, d.y) * Math.hypot(direction.x, direction.y))) return [];
+    const t = vecCross(vecSub(origin, s.from), direction) / den;
+    return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
+  }
+  return cubicLineIntersections(segmentCubic(s), origin, direction);
+}
+
+/** Parameters of the flattening polyline (lines give [0, 1]). */
+export function segmentFlattenTimes(s: Segment, tolerance = FLATNESS): number[] {
+  return s.kind === 'line' ? [0, 1] : cubicFlattenTimes(segmentCubic(s), tolerance);
+}
+
+export function segmentAreaContribution(s: Segment): number {
+  if (s.kind === 'line') return 0.5 * (s.from.x * s.to.y - s.to.x * s.from.y);
+  return cubicAreaContribution(segmentCubic(s));
+}
+
+// ---------------------------------------------------------------- SVG path data
+
+function arcToCubics(
+  from: Point,
+  rx: number,
+  ry: number,
+  xRotDeg: number,
+  large: boolean,
+  sweep: boolean,
+  to: Point,
+): Cubic[] {
+  // SVG 1.1 implementation notes F.6.5 (endpoint → centre) and F.6.6 (radius correction).
+  if (vecDistance(from, to) < POINT_EPSILON) return [];
+  rx = Math.abs(rx);
+  ry = Math.abs(ry);
+  if (rx < POINT_EPSILON || ry < POINT_EPSILON) return [[from, vecLerp(from, to, 1 / 3), vecLerp(from, to, 2 / 3), to]];
+  const phi = (xRotDeg * Math.PI) / 180;
+  const cos = Math.cos(phi);
+  const sin = Math.sin(phi);
+  const dx = (from.x - to.x) / 2;
+  const dy = (from.y - to.y) / 2;
+  const x1p = cos * dx + sin * dy;
+  const y1p = -sin * dx + cos * dy;
+  const lambda = (x1p * x1p) / (rx * rx) + (y1p * y1p) / (ry * ry);
+  if (lambda > 1) {
+    const k = Math.sqrt(lambda);
+    rx *= k;
+    ry *= k;
+  }
+  const num = rx * rx * ry * ry - rx * rx * y1p * y1p - ry * ry * x1p * x1p;
+  const den = rx * rx * y1p * y1p + ry * ry * x1p * x1p;
+  let coef = Math.sqrt(Math.max(0, num / den));
+  if (large === sweep) coef = -coef;
+  const cxp = (coef * rx * y1p) / ry;
+  const cyp = (-coef * ry * x1p) / rx;
+  const cx = cos * cxp - sin * cyp + (from.x + to.x) / 2;
+  const cy = sin * cxp + cos * cyp + (from.y + to.y) / 2;
+  const ang = (ux: number, uy: number, vx: number, vy: number): number => Math.atan2(ux * vy - uy * vx, ux * vx + uy * vy);
+  const theta1 = ang(1, 0, (x1p - cxp) / rx, (y1p - cyp) / ry);
+  let dtheta = ang((x1p - cxp) / rx, (y1p - cyp) / ry, (-x1p - cxp) / rx, (-y1p - cyp) / ry);
+  if (!sweep && dtheta > 0) dtheta -= 2 * Math.PI;
+  if (sweep && dtheta < 0) dtheta += 2 * Math.PI;
+  const n = Math.max(1, Math.ceil(Math.abs(dtheta) / (Math.PI / 4) - 1e-9));
+  const step = dtheta / n;
+  const k = (4 / 3) * Math.tan(step / 4);
+  const at = (th: number): Point => ({
+    x: cx + rx * Math.cos(th) * cos - ry * Math.sin(th) * sin,
+    y: cy + rx * Math.cos(th) * sin + ry * Math.sin(th) * cos,
+  });
+  const deriv = (th: number): Point => ({
+    x: -rx * Math.sin(th) * cos - ry * Math.cos(th) * sin,
+    y: -rx * Math.sin(th) * sin + ry * Math.cos(th) * cos,
+  });
+  const out: Cubic[] = [];
+  let prev = from;
+  for (let i = 0; i < n; i++) {
+    const a = theta1 + i * step;
+    const b = a + step;
+    const pa = prev;
+    const pb = i === n - 1 ? to : at(b);
+    const da = deriv(a);
+    const db = deriv(b);
+    out.push([pa, { x: pa.x + k * da.x, y: pa.y + k * da.y }, { x: pb.x - k * db.x, y: pb.y - k * db.y }, pb]);
+    prev = pb;
+  }
+  return out;
+}
+
+/**
+ * Read SVG path data (all commands, absolute or relative, shorthand S/T, arcs A). Each M
+ * starts a contour; Z closes it. A contour whose end lies within CLOSE_GAP of its start is
+ * also marked closed. Zero-length segments are dropped; contours with no segments are dropped.
+ * Throws PathDataError for unreadable data or non-finite numbers.
+ */
+export function pathFromSvg(d: string): Path {
+  const cached = PARSE_CACHE.get(d);
+  if (cached) return cached;
+  const path = readPath(d);
+  if (d.length <= PARSE_CACHE_MAX_LENGTH) {
+    if (PARSE_CACHE.size >= PARSE_CACHE_SIZE) PARSE_CACHE.clear();
+    PARSE_CACHE.set(d, path);
+  }
+  return path;
+}
+
+/**
+ * Parsed paths by their text. Paths are read-only values and parsing is a pure function of
+ * the text, so sharing them changes no result; it saves re-reading the outlines and lines
+ * that an operation leaves as they were. Bounded: cleared when full.
+ */
+const PARSE_CACHE = new Map<string, Path>();
+const PARSE_CACHE_SIZE = 4096;
+const PARSE_CACHE_MAX_LENGTH = 500_000;
+
+function readPath(d: string): Path {
+  const commands = fastCommands(d) ?? libraryCommands(d);
+  const contours: Contour[] = [];
+  let segments: Segment[] = [];
+  let start: Point | null = null;
+  let current: Point | null = null;
+  let closed = false;
+  const finish = (): void => {
+    if (segments.length > 0 && start) {
+      const last = segments[segments.length - 1]!;
+      const gap = vecDistance(last.to, start);
+      if (closed && gap > POINT_EPSILON) segments.push(lineSegment(last.to, start));
+      else if (closed || gap <= CLOSE_GAP) {
+        // snap the end exactly onto the start
+        segments[segments.length - 1] = segmentMapPoints(last, (p) => (p === last.to ? start! : p));
+        closed = true;
+      }
+      contours.push({ segments, closed });
+    }
+    segments = [];
+    closed = false;
+  };
+  for (const { c, v } of commands) {
+    for (const x of v) if (!Number.isFinite(x)) throw new PathDataError('path data contains a number that is not finite');
+    if (c !== 'M' && c !== 'Z' && !current) throw new PathDataError('path data must start with M');
+    switch (c) {
+      case 'M':
+        finish();
+        start = current = { x: v[0]!, y: v[1]! };
+        break;
+      case 'Z':
+        if (start) {
+          closed = true;
+          finish();
+          current = start;
+        }
+        break;
+      case 'L': {
+        const to = { x: v[0]!, y: v[1]! };
+        if (vecDistance(current!, to) > POINT_EPSILON) segments.push(lineSegment(current!, to));
+        current = to;
+        break;
+      }
+      case 'C': {
+        const c1 = { x: v[0]!, y: v[1]! };
+        const c2 = { x: v[2]!, y: v[3]! };
+        const to = { x: v[4]!, y: v[5]! };
+        if (vecDistance(current!, to) > POINT_EPSILON || vecDistance(current!, c1) > POINT_EPSILON || vecDistance(current!, c2) > POINT_EPSILON)
+          segments.push({ kind: 'cubic', from: current!, c1, c2, to });
+        current = to;
+        break;
+      }
+      case 'Q': {
+        const to = { x: v[2]!, y: v[3]! };
+        segments.push(cubicSegment(quadraticToCubic([current!, { x: v[0]!, y: v[1]! }, to])));
+        current = to;
+        break;
+      }
+      case 'A': {
+        const to = { x: v[5]!, y: v[6]! };
+        for (const cu of arcToCubics(current!, v[0]!, v[1]!, v[2]!, v[3] === 1, v[4] === 1, to)) segments.push(cubicSegment(cu));
+        current = to;
+        break;
+      }
+    }
+  }
+  finish();
+  return contours;
+}
+
+interface RawCommand {
+  readonly c: 'M' | 'L' | 'C' | 'Q' | 'A' | 'Z';
+  readonly v: readonly number[];
+}
+
+const FAST_ARITY: Record<string, number> = { M: 2, L: 2, C: 6, Z: 0 };
+
+/**
+ * Fast reader for the plain form that pathToSvg writes (absolute M, L, C, Z with plain
+ * decimal numbers separated by spaces or commas, one letter per command). Anything else
+ * returns undefined and is read by svg-pathdata; both give the same commands.
+ */
+function fastCommands(d: string): RawCommand[] | undefined {
+  const out: RawCommand[] = [];
+  let cmd: RawCommand['c'] | undefined;
+  let nums: number[] = [];
+  const flush = (): boolean => {
+    if (!cmd) return nums.length === 0;
+    if (nums.length !== FAST_ARITY[cmd]) return false;
+    out.push({ c: cmd, v: nums });
+    nums = [];
+    return true;
+  };
+  const n = d.length;
+  let i = 0;
+  while (i < n) {
+    const ch = d.charCodeAt(i);
+    if (ch === 32 || ch === 44 || ch === 10 || ch === 13 || ch === 9) {
+      i++;
+      continue;
+    }
+    if (ch === 77 || ch === 76 || ch === 67 || ch === 90) {
+      // M L C Z
+      if (!flush()) return undefined;
+      cmd = d[i] as RawCommand['c'];
+      i++;
+      continue;
+    }
+    // a plain decimal: -?digits[.digits] or -?.digits
+    let j = i;
+    if (ch === 45) j++;
+    const startDigits = j;
+    while (j < n && d.charCodeAt(j) >= 48 && d.charCodeAt(j) <= 57) j++;
+    if (j < n && d.charCodeAt(j) === 46) {
+      j++;
+      while (j < n && d.charCodeAt(j) >= 48 && d.charCodeAt(j) <= 57) j++;
+    }
+    if (j === startDigits || (j === startDigits + 1 && d.charCodeAt(startDigits) === 46)) return undefined;
+    const next = j < n ? d.charCodeAt(j) : 32;
+    // anything but a separator, a command letter or a sign after a number: not the plain form
+    if (!(next === 32 || next === 44 || next === 10 || next === 13 || next === 9 || next === 45 || next === 77 || next === 76 || next === 67 || next === 90)) return undefined;
+    nums.push(Number(d.slice(i, j)));
+    i = j;
+  }
+  if (!flush()) return undefined;
+  return out.length === 0 || out[0]!.c === 'M' ? out : undefined;
+}
+
+function libraryCommands(d: string): RawCommand[] {
+  let commands;
+  try {
+    commands = new SVGPathData(d).toAbs().normalizeHVZ(false, true, true).normalizeST().qtToC().commands;
+  } catch (error) {
+    throw new PathDataError(`unreadable path data: ${(error as Error).message}`);
+  }
+  return commands.map((c): RawCommand => {
+    switch (c.type) {
+      case SVGPathData.MOVE_TO:
+        return { c: 'M', v: [c.x, c.y] };
+      case SVGPathData.CLOSE_PATH:
+        return { c: 'Z', v: [] };
+      case SVGPathData.LINE_TO:
+        return { c: 'L', v: [c.x, c.y] };
+      case SVGPathData.CURVE_TO:
+        return { c: 'C', v: [c.x1, c.y1, c.x2, c.y2, c.x, c.y] };
+      case SVGPathData.QUAD_TO:
+        return { c: 'Q', v: [c.x1, c.y1, c.x, c.y] };
+      case SVGPathData.ARC:
+        return { c: 'A', v: [c.rX, c.rY, c.xRot, c.lArcFlag, c.sweepFlag, c.x, c.y] };
+      default:
+        throw new PathDataError(`unsupported path command type ${String(c.type)}`);
+    }
+  });
+}
+
+function fmt(v: number, decimals: number): string {
+  // rounding by an integer power of ten then String() prints the shortest exact decimal
+  const k = POW10[decimals] ?? 10 ** decimals;
+  const r = Math.round(v * k) / k;
+  return r === 0 ? '0' : String(r);
+}
+const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
+
+/** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
+export function pathToSvg(path: Path, decimals = 4): string {
+  const parts: string[] = [];
+  for (const c of path) {
+    if (c.segments.length === 0) continue;
+    const first = c.segments[0]!;
+    parts.push(`M${fmt(first.from.x, decimals)} ${fmt(first.from.y, decimals)}`);
+    c.segments.forEach((s, i) => {
+      if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return; // Z draws it
+      const p = (q: Point): string => `${fmt(q.x, decimals)} ${fmt(q.y, decimals)}`;
+      parts.push(s.kind === 'line' ? `L${p(s.to)}` : `C${p(s.c1)} ${p(s.c2)} ${p(s.to)}`);
+    });
+    if (c.closed) parts.push('Z');
+  }
+  return parts.join(' ');
+}
+
+/** A contour through the given points joined by straight lines. Fewer than 2 points give an empty contour. */
+export function contourFromPoints(input: readonly Point[], closed: boolean): Contour {
+  // consecutive duplicates (within POINT_EPSILON) would make zero-length segments
+  const points = input.filter((p, i) => i === 0 || vecDistance(p, input[i - 1]!) > POINT_EPSILON);
+  const segments: Segment[] = [];
+  for (let i = 1; i < points.length; i++) segments.push(lineSegment(points[i - 1]!, points[i]!));
+  if (closed && points.length > 2 && vecDistance(points[points.length - 1]!, points[0]!) > POINT_EPSILON)
+    segments.push(lineSegment(points[points.length - 1]!, points[0]!));
+  return { segments, closed: closed && points.length > 2 };
+}
+
+export function contourTransform(c: Contour, m: Affine): Contour {
+  return { closed: c.closed, segments: c.segments.map((s) => segmentTransform(s, m)) };
+}
+
+export function pathTransform(path: Path, m: Affine): Path {
+  return path.map((c) => contourTransform(c, m));
+}
+
+export function contourReverse(c: Contour): Contour {
+  return { closed: c.closed, segments: [...c.segments].reverse().map(segmentReverse) };
+}
+
+export function contourLength(c: Contour, tolerance = LENGTH_TOLERANCE): number {
+  const per = tolerance / Math.max(1, c.segments.length);
+  return c.segments.reduce((sum, s) => sum + segmentLength(s, per), 0);
+}
+
+export function pathLength(path: Path, tolerance = LENGTH_TOLERANCE): number {
+  return path.reduce((sum, c) => sum + contourLength(c, tolerance / Math.max(1, path.length)), 0);
+}
+
+/**
+ * Signed enclosed area (mm²), exact for lines and cubics. With y down, positive = clockwise
+ * on screen. An open contour is measured as if closed by its chord.
+ */
+export function contourSignedArea(c: Contour): number {
+  let a = 0;
+  for (const s of c.segments) a += segmentAreaContribution(s);
+  if (!c.closed && c.segments.length > 0) a += segmentAreaContribution(lineSegment(c.segments[c.segments.length - 1]!.to, c.segments[0]!.from));
+  return a;
+}
+
+export function contourArea(c: Contour): number {
+  return Math.abs(contourSignedArea(c));
+}
+
+export function contourStart(c: Contour): Point | undefined {
+  return c.segments[0]?.from;
+}
+
+/** Tight bounds; an empty contour gives infinities. */
+export function contourBounds(c: Contour): { minX: number; minY: number; maxX: number; maxY: number } {
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const s of c.segments) {
+    const b = cubicBounds(segmentCubic(s));
+    minX = Math.min(minX, b.minX);
+    minY = Math.min(minY, b.minY);
+    maxX = Math.max(maxX, b.maxX);
+    maxY = Math.max(maxY, b.maxY);
+  }
+  return { minX, minY, maxX, maxY };
+}
+
+/** A flattened contour: polyline vertices with the segment and parameter each came from. */
+export interface FlatPoint {
+  readonly point: Point;
+  readonly segmentIndex: number;
+  readonly t: number;
+}
+
+/**
+ * Flatten to a polyline within `tolerance` of the contour. For a closed contour the first
+ * point is not repeated at the end.
+ */
+export function contourFlatten(c: Contour, tolerance = FLATNESS): FlatPoint[] {
+  const out: FlatPoint[] = [];
+  c.segments.forEach((s, i) => {
+    const ts = segmentFlattenTimes(s, tolerance);
+    ts.forEach((t, k) => {
+      if (k === 0 && i > 0) return;
+      out.push({ point: t === 0 ? s.from : t === 1 ? s.to : segmentPoint(s, t), segmentIndex: i, t });
+    });
+  });
+  if (c.closed && out.length > 1) out.pop();
+  return out;
+}
+
+/** Where a contour crosses or touches itself. */
+export interface SelfCrossing {
+  readonly point: Point;
+  /** Indices of the two segments that meet. */
+  readonly segments: readonly [number, number];
+}
+
+function segmentsIntersect(a: Point, b: Point, c: Point, d: Point): Point | null {
+  const r = vecSub(b, a);
+  const s = vecSub(d, c);
+  const den = vecCross(r, s);
+  const qp = vecSub(c, a);
+  if (Math.abs(den) < 1e-15) {
+    // parallel: overlapping collinear pieces count as touching
+    if (Math.abs(vecCross(qp, r)) > 1e-9 * Math.max(1, Math.hypot(r.x, r.y))) return null;
+    const rr = vecDot(r, r);
+    if (rr === 0) return null;
+    const t0 = vecDot(qp, r) / rr;
+    const t1 = t0 + vecDot(s, r) / rr;
+    const lo = Math.max(0, Math.min(t0, t1));
+    const hi = Math.min(1, Math.max(t0, t1));
+    return lo <= hi ? vecLerp(a, b, (lo + hi) / 2) : null;
+  }
+  const t = vecCross(qp, s) / den;
+  const u = vecCross(qp, r) / den;
+  const e = 1e-12;
+  return t >= -e && t <= 1 + e && u >= -e && u <= 1 + e ? vecLerp(a, b, t) : null;
+}
+
+/**
+ * Find places where a contour crosses or touches itself, on its flattening within
+ * `tolerance` (so two parts nearer than about `tolerance` may be reported as touching).
+ * Neighbouring polyline edges share a vertex and are not reported. Sweep over x.
+ */
+export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCrossing[] {
+  const raw = contourFlatten(c, tolerance);
+  const flat = raw.filter((f, i) => i === 0 || vecDistance(f.point, raw[i - 1]!.point) > POINT_EPSILON);
+  if (c.closed && flat.length > 1 && vecDistance(flat[0]!.point, flat[flat.length - 1]!.point) <= POINT_EPSILON) flat.pop();
+  const n = flat.length;
+  const edgeCount = c.closed ? n : n - 1;
+  if (edgeCount < 3) return [];
+  const edges = Array.from({ length: edgeCount }, (_, i) => {
+    const a = flat[i]!;
+    const b = flat[(i + 1) % n]!;
+    return { i, a: a.point, b: b.point, seg: b.t === 0 ? a.segmentIndex : b.segmentIndex, minX: Math.min(a.point.x, b.point.x), maxX: Math.max(a.point.x, b.point.x) };
+  });
+  const order = [...edges].sort((p, q) => p.minX - q.minX);
+  const out: SelfCrossing[] = [];
+  const active: typeof edges = [];
+  for (const e of order) {
+    for (let k = active.length - 1; k >= 0; k--) if (active[k]!.maxX < e.minX - 1e-12) active.splice(k, 1);
+    for (const o of active) {
+      const gap = Math.abs(o.i - e.i);
+      if (gap <= 1 || (c.closed && gap === edgeCount - 1)) continue;
+      if (Math.max(o.a.y, o.b.y) < Math.min(e.a.y, e.b.y) || Math.max(e.a.y, e.b.y) < Math.min(o.a.y, o.b.y)) continue;
+      const p = segmentsIntersect(o.a, o.b, e.a, e.b);
+      if (p) out.push({ point: p, segments: o.seg < e.seg ? [o.seg, e.seg] : [e.seg, o.seg] });
+    }
+    active.push(e);
+  }
+  return out;
+}
+
+/** True when the contour is closed and neither crosses nor touches itself. */
+export function contourIsSimple(c: Contour, tolerance = FLATNESS): boolean {
+  return c.closed && contourSelfCrossings(c, tolerance).length === 0;
+}
+
+/** A location on a contour. */
+export interface ContourLocation {
+  readonly segmentIndex: number;
+  readonly t: number;
+  readonly point: Point;
+}
+
+/** Nearest location on the contour to p; `distance` in mm. An empty contour throws RangeError. */
+export function contourNearest(c: Contour, p: Point): ContourLocation & { readonly distance: number } {
+  if (c.segments.length === 0) throw new RangeError('contourNearest: empty contour');
+  let best: ContourLocation & { distance: number } = { segmentIndex: 0, t: 0, point: c.segments[0]!.from, distance: Infinity };
+  c.segments.forEach((s, i) => {
+    // the curve lies in the box of its control points: skip segments whose box is farther than the best so far
+    const xs = s.kind === 'line' ? [s.from.x, s.to.x] : [s.from.x, s.c1.x, s.c2.x, s.to.x];
+    const ys = s.kind === 'line' ? [s.from.y, s.to.y] : [s.from.y, s.c1.y, s.c2.y, s.to.y];
+    const dx = Math.max(Math.min(...xs) - p.x, 0, p.x - Math.max(...xs));
+    const dy = Math.max(Math.min(...ys) - p.y, 0, p.y - Math.max(...ys));
+    if (Math.hypot(dx, dy) > best.distance) return;
+    let t: number;
+    if (s.kind === 'line') {
+      const d = vecSub(s.to, s.from);
+      const l2 = vecDot(d, d);
+      t = l2 === 0 ? 0 : Math.max(0, Math.min(1, vecDot(vecSub(p, s.from), d) / l2));
+    } else t = cubicNearestTime(segmentCubic(s), p);
+    const q = segmentPoint(s, t);
+    const dist = vecDistance(p, q);
+    if (dist < best.distance) best = { segmentIndex: i, t, point: q, distance: dist };
+  });
+  return best;
+}
+
+/** All places where the contour meets an infinite line, in contour order. */
+export function contourLineIntersections(c: Contour, origin: Point, direction: Point): ContourLocation[] {
+  const out: ContourLocation[] = [];
+  c.segments.forEach((s, i) => {
+    for (const t of segmentLineIntersections(s, origin, direction)) {
+      const point = segmentPoint(s, t);
+      const prev = out[out.length - 1];
+      if (prev && vecDistance(prev.point, point) < POINT_EPSILON) continue;
+      out.push({ segmentIndex: i, t, point });
+    }
+  });
+  if (c.closed && out.length > 1 && vecDistance(out[0]!.point, out[out.length - 1]!.point) < POINT_EPSILON) out.pop();
+  return out;
+}
+
+/** Arc length from the contour start to a location. */
+export function contourOffsetOf(c: Contour, loc: { segmentIndex: number; t: number }, tolerance = LENGTH_TOLERANCE): number {
+  let sum = 0;
+  for (let i = 0; i < loc.segmentIndex; i++) sum += segmentLength(c.segments[i]!, tolerance);
+  const s = c.segments[loc.segmentIndex];
+  if (!s) return sum;
+  return sum + (s.kind === 'line' ? vecDistance(s.from, s.to) * loc.t : cubicLength(segmentCubic(s), tolerance, 0, loc.t));
+}
+
+/** Location at an arc-length offset from the start (clamped to [0, length]). */
+export function contourLocationAtOffset(c: Contour, offset: number, tolerance = LENGTH_TOLERANCE): ContourLocation {
+  if (c.segments.length === 0) throw new RangeError('contourLocationAtOffset: empty contour');
+  let rest = Math.max(0, offset);
+  for (let i = 0; i < c.segments.length; i++) {
+    const s = c.segments[i]!;
+    const l = segmentLength(s, tolerance);
+    if (rest <= l || i === c.segments.length - 1) {
+      const t = l === 0 ? 0 : s.kind === 'line' ? Math.min(1, rest / l) : cubicTimeAtLength(segmentCubic(s), Math.min(rest, l), tolerance);
+      return { segmentIndex: i, t, point: segmentPoint(s, t) };
+    }
+    rest -= l;
+  }
+  const last = c.segments[c.segments.length - 1]!;
+  return { segmentIndex: c.segments.length - 1, t: 1, point: last.to };
+}
+
+function compareLoc(a: { segmentIndex: number; t: number }, b: { segmentIndex: number; t: number }): number {
+  return a.segmentIndex - b.segmentIndex || a.t - b.t;
+}
+
+/**
+ * The open stretch of a contour from location `a` to location `b`, following the drawing
+ * direction. On a closed contour the stretch wraps past the start when b comes before a;
+ * a === b on a closed contour gives the whole loop. On an open contour b before a gives an
+ * empty stretch.
+ */
+export function contourStretch(c: Contour, a: { segmentIndex: number; t: number }, b: { segmentIndex: number; t: number }): Contour {
+  const segs = c.segments;
+  const out: Segment[] = [];
+  const push = (s: Segment): void => {
+    if (segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
+  };
+  const cmp = compareLoc(a, b);
+  if (cmp < 0 || (cmp === 0 && !c.closed)) {
+    if (a.segmentIndex === b.segmentIndex) {
+      if (cmp < 0) push(segmentSlice(segs[a.segmentIndex]!, a.t, b.t));
+    } else {
+      push(segmentSlice(segs[a.segmentIndex]!, a.t, 1));
+      for (let i = a.segmentIndex + 1; i < b.segmentIndex; i++) push(segs[i]!);
+      push(segmentSlice(segs[b.segmentIndex]!, 0, b.t));
+    }
+    return { segments: out, closed: false };
+  }
+  if (!c.closed) return { segments: [], closed: false };
+  push(segmentSlice(segs[a.segmentIndex]!, a.t, 1));
+  for (let i = a.segmentIndex + 1; i < segs.length; i++) push(segs[i]!);
+  for (let i = 0; i < b.segmentIndex; i++) push(segs[i]!);
+  push(segmentSlice(segs[b.segmentIndex]!, 0, b.t));
+  return { segments: out, closed: false };
+}
+
+/** Rotate a closed contour so that it starts at the given location (splitting a segment if needed). */
+export function contourStartAt(c: Contour, loc: { segmentIndex: number; t: number }): Contour {
+  if (!c.closed) throw new RangeError('contourStartAt: the contour is open');
+  const s = contourStretch(c, loc, loc);
+  return { segments: s.segments, closed: true };
+}
+
+/** Tangent direction at the start and end of a segment, for corner tests. */
+export function segmentEndTangents(s: Segment): { start: Point; end: Point } {
+  if (s.kind === 'line') {
+    const d = vecNormalize(vecSub(s.to, s.from));
+    return { start: d, end: d };
+  }
+  const c = segmentCubic(s);
+  return { start: cubicTangent(c, 0), end: cubicTangent(c, 1) };
+}
+
+/** Derivative of a segment at t (for advanced callers). */
+export function segmentDerivative(s: Segment, t: number): Point {
+  return s.kind === 'line' ? vecSub(s.to, s.from) : cubicDerivative(segmentCubic(s), t);
+}

@@ -1,0 +1,176 @@
+/**
+ * Points, vectors and affine maps. Plain `{ x, y }` data in millimetres, y grows downward.
+ * Every function is pure and returns new objects.
+ */
+import { POINT_EPSILON } from './tolerance.ts';
+
+/** A point or a vector (mm). */
+export interface Point {
+  readonly x: number;
+  readonly y: number;
+}
+
+/** Shorthand constructor. */
+export function pt(x: number, y: number): Point {
+  return { x, y };
+}
+
+export function vecAdd(a: Point, b: Point): Point {
+  return { x: a.x + b.x, y: a.y + b.y };
+}
+
+export function vecSub(a: Point, b: Point): Point {
+  return { x: a.x - b.x, y: a.y - b.y };
+}
+
+export function vecScale(a: Point, k: number): Point {
+  return { x: a.x * k, y: a.y * k };
+}
+
+export function vecDot(a: Point, b: Point): number {
+  return a.x * b.x + a.y * b.y;
+}
+
+/** z of the 3-D cross product. With y down, a positive value means b is clockwise of a on screen. */
+export function vecCross(a: Point, b: Point): number {
+  return a.x * b.y - a.y * b.x;
+}
+
+export function vecLength(a: Point): number {
+  return Math.hypot(a.x, a.y);
+}
+
+export function vecDistance(a: Point, b: Point): number {
+  return Math.hypot(a.x - b.x, a.y - b.y);
+}
+
+/** Unit vector. Degenerate: a zero vector (length < POINT_EPSILON) returns {0, 0}. */
+export function vecNormalize(a: Point): Point {
+  const l = vecLength(a);
+  return l < POINT_EPSILON ? { x: 0, y: 0 } : { x: a.x / l, y: a.y / l };
+}
+
+/** a + (b − a)·k; k outside [0, 1] extrapolates. */
+export function vecLerp(a: Point, b: Point, k: number): Point {
+  return { x: a.x + (b.x - a.x) * k, y: a.y + (b.y - a.y) * k };
+}
+
+/** Rotate by angle (radians) about the origin; positive angles turn clockwise on screen (y down). */
+export function vecRotate(a: Point, angle: number): Point {
+  const c = Math.cos(angle);
+  const s = Math.sin(angle);
+  return { x: a.x * c - a.y * s, y: a.x * s + a.y * c };
+}
+
+/** Rotate about a centre. */
+export function vecRotateAbout(a: Point, centre: Point, angle: number): Point {
+  return vecAdd(centre, vecRotate(vecSub(a, centre), angle));
+}
+
+/** The vector turned +90° (clockwise on screen with y down): (x, y) → (−y, x). */
+export function vecPerp(a: Point): Point {
+  return { x: -a.y, y: a.x };
+}
+
+/** Same point within a tolerance (default POINT_EPSILON). */
+export function vecEquals(a: Point, b: Point, tolerance = POINT_EPSILON): boolean {
+  return vecDistance(a, b) <= tolerance;
+}
+
+/** Signed angle from a to b in (−π, π]; degenerate zero vectors give 0. */
+export function vecAngleBetween(a: Point, b: Point): number {
+  return Math.atan2(vecCross(a, b), vecDot(a, b));
+}
+
+/**
+ * An affine map in SVG `matrix(a b c d e f)` order:
+ * x' = a·x + c·y + e, y' = b·x + d·y + f.
+ */
+export interface Affine {
+  readonly a: number;
+  readonly b: number;
+  readonly c: number;
+  readonly d: number;
+  readonly e: number;
+  readonly f: number;
+}
+
+export const AFFINE_IDENTITY: Affine = { a: 1, b: 0, c: 0, d: 1, e: 0, f: 0 };
+
+export function affineApply(m: Affine, p: Point): Point {
+  return { x: m.a * p.x + m.c * p.y + m.e, y: m.b * p.x + m.d * p.y + m.f };
+}
+
+/** Apply only the linear part (for vectors). */
+export function affineApplyVector(m: Affine, v: Point): Point {
+  return { x: m.a * v.x + m.c * v.y, y: m.b * v.x + m.d * v.y };
+}
+
+/** The map "first n, then m". */
+export function affineMultiply(m: Affine, n: Affine): Affine {
+  return {
+    a: m.a * n.a + m.c * n.b,
+    b: m.b * n.a + m.d * n.b,
+    c: m.a * n.c + m.c * n.d,
+    d: m.b * n.c + m.d * n.d,
+    e: m.a * n.e + m.c * n.f + m.e,
+    f: m.b * n.e + m.d * n.f + m.f,
+  };
+}
+
+export function affineDeterminant(m: Affine): number {
+  return m.a * m.d - m.b * m.c;
+}
+
+/** Inverse map. Throws RangeError when the map is singular (|det| < 1e-12). */
+export function affineInvert(m: Affine): Affine {
+  const det = affineDeterminant(m);
+  if (Math.abs(det) < 1e-12) throw new RangeError('affineInvert: the map is singular (determinant ≈ 0)');
+  return {
+    a: m.d / det,
+    b: -m.b / det,
+    c: -m.c / det,
+    d: m.a / det,
+    e: (m.c * m.f - m.d * m.e) / det,
+    f: (m.b * m.e - m.a * m.f) / det,
+  };
+}
+
+export function affineTranslate(dx: number, dy: number): Affine {
+  return { a: 1, b: 0, c: 0, d: 1, e: dx, f: dy };
+}
+
+export function affineScale(sx: number, sy = sx): Affine {
+  return { a: sx, b: 0, c: 0, d: sy, e: 0, f: 0 };
+}
+
+/** Rotation by angle (radians, clockwise on screen) about a centre (default origin). */
+export function affineRotate(angle: number, centre: Point = { x: 0, y: 0 }): Affine {
+  const c = Math.cos(angle);
+  const s = Math.sin(angle);
+  return {
+    a: c,
+    b: s,
+    c: -s,
+    d: c,
+    e: centre.x - c * centre.x + s * centre.y,
+    f: centre.y - s * centre.x - c * centre.y,
+  };
+}
+
+/**
+ * Scale by `along` in direction `axis` and by `across` at right angles to it, about `origin`.
+ * Degenerate: a zero axis is taken as +y.
+ */
+export function affineScaleInFrame(axis: Point, along: number, across: number, origin: Point): Affine {
+  let u = vecNormalize(axis);
+  if (u.x === 0 && u.y === 0) u = { x: 0, y: 1 };
+  const v = vecPerp(u);
+  // M = along·u uᵀ + across·v vᵀ
+  const a = along * u.x * u.x + across * v.x * v.x;
+  const b = along * u.x * u.y + across * v.x * v.y;
+  const d = along * u.y * u.y + across * v.y * v.y;
+  const lin: Affine = { a, b, c: b, d, e: 0, f: 0 };
+  const moved = affineApplyVector(lin, origin);
+  return { ...lin, e: origin.x - moved.x, f: origin.y - moved.y };
+}
