@@ -1,16 +1,13 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { projectRoot } from '../config.ts';
-
-interface Command {
-  name: string;
-  summary: string;
-  usage: string;
-  run(args: string[]): Promise<number>;
-}
+import type { Command } from './command.ts';
+import { alterCommand } from './commands/alter.ts';
+import { importCommand } from './commands/import.ts';
+import { measureCommand } from './commands/measure.ts';
 
 /** Commands register here as the engine, print and planner land. */
-const COMMANDS: Command[] = [];
+const COMMANDS: Command[] = [importCommand, alterCommand, measureCommand];
 
 function version(): string {
   const pkg = JSON.parse(readFileSync(path.join(projectRoot, 'package.json'), 'utf8')) as { version: string };
@@ -35,7 +32,11 @@ function help(): string {
 }
 
 /** Run the command line; returns the exit status. */
-export async function run(argv: string[], out = process.stdout, err = process.stderr): Promise<number> {
+export async function run(
+  argv: string[],
+  out: NodeJS.WritableStream = process.stdout,
+  err: NodeJS.WritableStream = process.stderr,
+): Promise<number> {
   const [name, ...rest] = argv;
   if (name === undefined || name === 'help' || name === '--help' || name === '-h') {
     out.write(`${help()}\n`);
@@ -55,7 +56,7 @@ export async function run(argv: string[], out = process.stdout, err = process.st
     return 0;
   }
   try {
-    return await command.run(rest);
+    return await command.run(rest, { stdout: out, stderr: err });
   } catch (e) {
     err.write(`blockwright ${name}: ${e instanceof Error ? e.message : String(e)}\n`);
     return 1;
