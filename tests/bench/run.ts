@@ -1,0 +1,4 @@
+/** `npm run bench`: every benchmark, one after the other, in one process. */
+import { alterationsBench } from './alterations.ts';
+
+await alterationsBench();
