@@ -44,6 +44,13 @@ export function passwordProblem(password: string): string | null {
   return null;
 }
 
+/** Problems of a new password typed twice, keyed by `name` and `repeat`. */
+export function newPasswordProblems(name: string, password: string, repeat: string): FieldErrors {
+  const issue = passwordProblem(password);
+  if (issue) return { [name]: issue };
+  return repeat === password ? {} : { repeat: 'The two passwords differ.' };
+}
+
 export function emailProblem(email: string): string | null {
   const trimmed = email.trim();
   if (trimmed === '') return 'Enter your e-mail address.';

@@ -1,12 +1,12 @@
 import { useRef, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
+import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { TextField } from '../../../components/ui/text-field';
 import { useErrorFocus } from '../../../components/ui/use-error-focus';
 import {
   formErrorsOf,
-  MIN_PASSWORD_LENGTH,
-  passwordProblem,
+  newPasswordProblems,
   type FieldErrors,
   type KnownErrors,
 } from '../../../lib/form-errors';
@@ -37,9 +37,7 @@ export function ChangePasswordForm() {
     setSaved(false);
     const problems: FieldErrors = {};
     if (currentPassword === '') problems.currentPassword = 'Enter your current password.';
-    const issue = passwordProblem(newPassword);
-    if (issue) problems.newPassword = issue;
-    else if (repeat !== newPassword) problems.repeat = 'The two new passwords differ.';
+    Object.assign(problems, newPasswordProblems('newPassword', newPassword, repeat));
     setClientErrors(problems);
     if (Object.keys(problems).length > 0) {
       setFailure({});
@@ -72,24 +70,13 @@ export function ChangePasswordForm() {
         onChange={(event) => setCurrentPassword(event.target.value)}
         error={errors.fields.currentPassword}
       />
-      <TextField
-        label="New password"
-        hint={`At least ${MIN_PASSWORD_LENGTH} characters.`}
+      <NewPasswordFields
         name="newPassword"
-        type="password"
-        autoComplete="new-password"
-        value={newPassword}
-        onChange={(event) => setNewPassword(event.target.value)}
-        error={errors.fields.newPassword}
-      />
-      <TextField
-        label="Repeat password"
-        name="repeat"
-        type="password"
-        autoComplete="new-password"
-        value={repeat}
-        onChange={(event) => setRepeat(event.target.value)}
-        error={errors.fields.repeat}
+        password={newPassword}
+        repeat={repeat}
+        onPasswordChange={setNewPassword}
+        onRepeatChange={setRepeat}
+        errors={errors.fields}
       />
       <div>
         <Button type="submit" pending={change.isPending} pendingLabel="Changing…">

@@ -1,12 +1,11 @@
 import { useRef, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
+import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { useErrorFocus } from '../../../components/ui/use-error-focus';
 import {
   formErrorsOf,
-  MIN_PASSWORD_LENGTH,
-  passwordProblem,
+  newPasswordProblems,
   type FieldErrors,
   type KnownErrors,
 } from '../../../lib/form-errors';
@@ -32,10 +31,7 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const problems: FieldErrors = {};
-    const issue = passwordProblem(password);
-    if (issue) problems.password = issue;
-    else if (repeat !== password) problems.repeat = 'The two passwords differ.';
+    const problems = newPasswordProblems('password', password, repeat);
     setClientErrors(problems);
     if (Object.keys(problems).length > 0) {
       setFailure({});
@@ -47,24 +43,13 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
   return (
     <form ref={formRef} noValidate onSubmit={handleSubmit} className="flex flex-col gap-4">
       <FormAlert>{errors.message}</FormAlert>
-      <TextField
-        label="New password"
-        hint={`At least ${MIN_PASSWORD_LENGTH} characters.`}
+      <NewPasswordFields
         name="password"
-        type="password"
-        autoComplete="new-password"
-        value={password}
-        onChange={(event) => setPassword(event.target.value)}
-        error={errors.fields.password}
-      />
-      <TextField
-        label="Repeat password"
-        name="repeat"
-        type="password"
-        autoComplete="new-password"
-        value={repeat}
-        onChange={(event) => setRepeat(event.target.value)}
-        error={errors.fields.repeat}
+        password={password}
+        repeat={repeat}
+        onPasswordChange={setPassword}
+        onRepeatChange={setRepeat}
+        errors={errors.fields}
       />
       <div className="pt-1">
         <Button type="submit" pending={confirm.isPending} pendingLabel="Saving…">
