@@ -199,19 +199,61 @@ export function cubicIsStraight(c: Cubic, tolerance = POINT_EPSILON): boolean {
  * t of the polyline vertices, starting with 0 and ending with 1.
  */
 export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
+  // Scalar form of: split at ½ by de Casteljau until cubicFlatness(part) <= tolerance (or
+  // depth 20). Same arithmetic as cubicSplit/cubicFlatness, without allocating a point per
+  // step, so the parameters are exactly those of the plain recursion.
   const out = [0];
-  const recurse = (part: Cubic, t0: number, t1: number, depth: number): void => {
-    if (depth >= 20 || cubicFlatness(part) <= tolerance) {
+  const tol2 = tolerance * tolerance;
+  const recurse = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, t0: number, t1: number, depth: number): void => {
+    if (depth >= 20 || flatWithin(x0, y0, x1, y1, x2, y2, x3, y3, tolerance, tol2)) {
       out.push(t1);
       return;
     }
-    const [l, r] = cubicSplit(part, 0.5);
+    const x01 = x0 + (x1 - x0) * 0.5;
+    const y01 = y0 + (y1 - y0) * 0.5;
+    const x12 = x1 + (x2 - x1) * 0.5;
+    const y12 = y1 + (y2 - y1) * 0.5;
+    const x23 = x2 + (x3 - x2) * 0.5;
+    const y23 = y2 + (y3 - y2) * 0.5;
+    const x012 = x01 + (x12 - x01) * 0.5;
+    const y012 = y01 + (y12 - y01) * 0.5;
+    const x123 = x12 + (x23 - x12) * 0.5;
+    const y123 = y12 + (y23 - y12) * 0.5;
+    const xm = x012 + (x123 - x012) * 0.5;
+    const ym = y012 + (y123 - y012) * 0.5;
     const tm = (t0 + t1) / 2;
-    recurse(l, t0, tm, depth + 1);
-    recurse(r, tm, t1, depth + 1);
+    recurse(x0, y0, x01, y01, x012, y012, xm, ym, t0, tm, depth + 1);
+    recurse(xm, ym, x123, y123, x23, y23, x3, y3, tm, t1, depth + 1);
   };
-  recurse(c, 0, 1, 0);
+  recurse(c[0].x, c[0].y, c[1].x, c[1].y, c[2].x, c[2].y, c[3].x, c[3].y, 0, 1, 0);
   return out;
+}
+
+/** cubicFlatness(c) <= tolerance, decided without Math.hypot unless the squares are too close to call. */
+function flatWithin(x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, tolerance: number, tol2: number): boolean {
+  return pointNearChord(x1, y1, x0, y0, x3, y3, tolerance, tol2) && pointNearChord(x2, y2, x0, y0, x3, y3, tolerance, tol2);
+}
+
+/** distanceToSegment(p, a, b) <= tolerance, same arithmetic. */
+function pointNearChord(px: number, py: number, ax: number, ay: number, bx: number, by: number, tolerance: number, tol2: number): boolean {
+  const abx = bx - ax;
+  const aby = by - ay;
+  const l2 = abx * abx + aby * aby;
+  let dx: number;
+  let dy: number;
+  if (l2 < POINT_EPSILON * POINT_EPSILON) {
+    dx = px - ax;
+    dy = py - ay;
+  } else {
+    const k = Math.max(0, Math.min(1, ((px - ax) * abx + (py - ay) * aby) / l2));
+    dx = px - (ax + abx * k);
+    dy = py - (ay + aby * k);
+  }
+  const d2 = dx * dx + dy * dy;
+  // the squared sum differs from hypot² by a few ulps at most: decide directly away from the boundary
+  if (d2 < tol2 * (1 - 1e-9)) return true;
+  if (d2 > tol2 * (1 + 1e-9)) return false;
+  return Math.hypot(dx, dy) <= tolerance;
 }
 
 /** The polyline of cubicFlattenTimes as points (first = c[0], last = c[3]). */

@@ -505,13 +505,47 @@ export interface FlatPoint {
  * point is not repeated at the end.
  */
 export function contourFlatten(c: Contour, tolerance = FLATNESS): FlatPoint[] {
+  let byTolerance = FLATTEN_CACHE.get(c);
+  if (!byTolerance) {
+    byTolerance = new Map();
+    FLATTEN_CACHE.set(c, byTolerance);
+  }
+  let flat = byTolerance.get(tolerance);
+  if (!flat) {
+    flat = flattenContour(c, tolerance);
+    byTolerance.set(tolerance, flat);
+  }
+  return flat.slice();
+}
+
+/**
+ * Flattenings by contour object and tolerance. Contours are read-only values and flattening is
+ * a pure function of them, so sharing the result changes nothing; it saves flattening the same
+ * outline again in the next check or operation (outlines an operation leaves alone are the
+ * very same objects, through the parse memo of pathFromSvg). Held weakly: no growth.
+ */
+const FLATTEN_CACHE = new WeakMap<Contour, Map<number, readonly FlatPoint[]>>();
+
+function flattenContour(c: Contour, tolerance: number): FlatPoint[] {
   const out: FlatPoint[] = [];
   c.segments.forEach((s, i) => {
-    const ts = segmentFlattenTimes(s, tolerance);
-    ts.forEach((t, k) => {
-      if (k === 0 && i > 0) return;
-      out.push({ point: t === 0 ? s.from : t === 1 ? s.to : segmentPoint(s, t), segmentIndex: i, t });
-    });
+    if (i === 0) out.push({ point: s.from, segmentIndex: 0, t: 0 });
+    if (s.kind === 'line') {
+      out.push({ point: s.to, segmentIndex: i, t: 1 });
+      return;
+    }
+    const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
+    for (let k = 1; k < ts.length; k++) {
+      const t = ts[k]!;
+      // cubicPoint's arithmetic, inline
+      const mt = 1 - t;
+      const a = mt * mt * mt;
+      const b = 3 * mt * mt * t;
+      const d = 3 * mt * t * t;
+      const e = t * t * t;
+      const point = t === 1 ? s.to : { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
+      out.push({ point, segmentIndex: i, t });
+    }
   });
   if (c.closed && out.length > 1) out.pop();
   return out;

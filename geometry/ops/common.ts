@@ -16,7 +16,6 @@ import {
   lineSegment,
   type Segment,
 } from '../path.ts';
-import { type Cubic, cubicPoint } from '../bezier.ts';
 import { SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
 import { type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, outlineContour, orderedOutlines } from '../model.ts';
 import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecNormalize, vecSub } from '../vec.ts';
@@ -237,11 +236,25 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
   // become a few cubics instead of one per point.
   const cum = [0];
   for (let k = 0; k < n; k++) cum.push(cum[k]! + h[k]!);
+  const tol2 = mergeTolerance * mergeTolerance;
   const fits = (k: number, m: number): Segment | undefined => {
     const len = cum[m]! - cum[k]!;
-    const seg = hermite(k, m, len);
-    const cubic: Cubic = [seg.from, (seg as { c1: Point }).c1, (seg as { c2: Point }).c2, seg.to];
-    for (let i = k + 1; i < m; i++) if (vecDistance(cubicPoint(cubic, (cum[i]! - cum[k]!) / len), q[i]!) > mergeTolerance) return undefined;
+    const seg = hermite(k, m, len) as Extract<Segment, { kind: 'cubic' }>;
+    const { from: p0, c1: p1, c2: p2, to: p3 } = seg;
+    for (let i = k + 1; i < m; i++) {
+      // vecDistance(cubicPoint(seg, u), q[i]) > mergeTolerance, with cubicPoint's arithmetic
+      // inline and Math.hypot only when the squared distance is too close to call
+      const u = (cum[i]! - cum[k]!) / len;
+      const mu = 1 - u;
+      const a = mu * mu * mu;
+      const b = 3 * mu * mu * u;
+      const c = 3 * mu * u * u;
+      const e = u * u * u;
+      const dx = a * p0.x + b * p1.x + c * p2.x + e * p3.x - q[i]!.x;
+      const dy = a * p0.y + b * p1.y + c * p2.y + e * p3.y - q[i]!.y;
+      const d2 = dx * dx + dy * dy;
+      if (d2 > tol2 * (1 + 1e-9) || (d2 >= tol2 * (1 - 1e-9) && Math.hypot(dx, dy) > mergeTolerance)) return undefined;
+    }
     return seg;
   };
   const out: Segment[] = [];

@@ -108,8 +108,9 @@ function deformSegment(s: Segment, field: Field): Segment[] {
   if (!field.mayMove(s.kind === 'line' ? [s.from, s.to] : [s.from, s.c1, s.c2, s.to])) return [s];
   const len = segmentLength(s, 1e-3);
   const m = Math.max(2, Math.ceil(len / 2));
-  const probe = Array.from({ length: m + 1 }, (_, k) => segmentPoint(s, k / m));
-  if (!probe.some(field.active)) return [s];
+  let moves = false;
+  for (let k = 0; k <= m && !moves; k++) moves = field.active(segmentPoint(s, k / m));
+  if (!moves) return [s];
   const n = Math.max(2, Math.ceil(len / 3));
   const pts = Array.from({ length: n + 1 }, (_, k) => field.displace(segmentPoint(s, k / n)));
   return smoothThrough(pts);
