@@ -395,9 +395,16 @@ export function cubicNearestTime(c: Cubic, p: Point): number {
   let best = 0;
   let bestD = Infinity;
   const n = 32;
+  const [p0, p1, p2, p3] = c;
   for (let i = 0; i <= n; i++) {
     const t = i / n;
-    const d = vecDistance(cubicPoint(c, t), p);
+    // vecDistance(cubicPoint(c, t), p) with cubicPoint's arithmetic inline
+    const mt = 1 - t;
+    const a = mt * mt * mt;
+    const b = 3 * mt * mt * t;
+    const e = 3 * mt * t * t;
+    const f = t * t * t;
+    const d = Math.hypot(a * p0.x + b * p1.x + e * p2.x + f * p3.x - p.x, a * p0.y + b * p1.y + e * p2.y + f * p3.y - p.y);
     if (d < bestD) {
       bestD = d;
       best = t;

@@ -404,8 +404,24 @@ function libraryCommands(d: string): RawCommand[] {
 function fmt(v: number, decimals: number): string {
   // rounding by an integer power of ten then String() prints the shortest exact decimal
   const k = POW10[decimals] ?? 10 ** decimals;
-  const r = Math.round(v * k) / k;
-  return r === 0 ? '0' : String(r);
+  const n = Math.round(v * k);
+  if (n === 0) return '0';
+  // Fast form of String(n / k): print the integer n and put the decimal point in. For at most
+  // 6 decimals and |n / k| < 1e6 mm the two agree: n / k is the double nearest to that decimal,
+  // and no shorter decimal is that near (the 10^-decimals grid is far coarser than a double's
+  // spacing there), so it is also the shortest decimal String() would print; below 1e-6 String()
+  // would switch to exponents, which 6 decimals never reach.
+  if (decimals <= 6 && Math.abs(n) < k * 1e6) {
+    const digits = String(Math.abs(n));
+    const sign = n < 0 ? '-' : '';
+    if (decimals === 0) return sign + digits;
+    const padded = digits.length > decimals ? digits : '0'.repeat(decimals + 1 - digits.length) + digits;
+    const cut = padded.length - decimals;
+    let end = padded.length;
+    while (end > cut && padded.charCodeAt(end - 1) === 48) end--;
+    return sign + padded.slice(0, cut) + (end > cut ? '.' + padded.slice(cut, end) : '');
+  }
+  return String(n / k);
 }
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
@@ -629,13 +645,31 @@ export interface ContourLocation {
 /** Nearest location on the contour to p; `distance` in mm. An empty contour throws RangeError. */
 export function contourNearest(c: Contour, p: Point): ContourLocation & { readonly distance: number } {
   if (c.segments.length === 0) throw new RangeError('contourNearest: empty contour');
+  // memo by contour object and point: a landmark is looked up again by the next edge that
+  // starts there, by the next check and by the next operation (read-only values, pure function)
+  let memo = NEAREST_CACHE.get(c);
+  if (!memo) {
+    memo = new Map();
+    NEAREST_CACHE.set(c, memo);
+  }
+  const key = `${p.x},${p.y}`;
+  const hit = memo.get(key);
+  if (hit) return hit;
   let best: ContourLocation & { distance: number } = { segmentIndex: 0, t: 0, point: c.segments[0]!.from, distance: Infinity };
   c.segments.forEach((s, i) => {
     // the curve lies in the box of its control points: skip segments whose box is farther than the best so far
-    const xs = s.kind === 'line' ? [s.from.x, s.to.x] : [s.from.x, s.c1.x, s.c2.x, s.to.x];
-    const ys = s.kind === 'line' ? [s.from.y, s.to.y] : [s.from.y, s.c1.y, s.c2.y, s.to.y];
-    const dx = Math.max(Math.min(...xs) - p.x, 0, p.x - Math.max(...xs));
-    const dy = Math.max(Math.min(...ys) - p.y, 0, p.y - Math.max(...ys));
+    let minX = Math.min(s.from.x, s.to.x);
+    let maxX = Math.max(s.from.x, s.to.x);
+    let minY = Math.min(s.from.y, s.to.y);
+    let maxY = Math.max(s.from.y, s.to.y);
+    if (s.kind === 'cubic') {
+      minX = Math.min(minX, s.c1.x, s.c2.x);
+      maxX = Math.max(maxX, s.c1.x, s.c2.x);
+      minY = Math.min(minY, s.c1.y, s.c2.y);
+      maxY = Math.max(maxY, s.c1.y, s.c2.y);
+    }
+    const dx = Math.max(minX - p.x, 0, p.x - maxX);
+    const dy = Math.max(minY - p.y, 0, p.y - maxY);
     if (Math.hypot(dx, dy) > best.distance) return;
     let t: number;
     if (s.kind === 'line') {
@@ -647,8 +681,12 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     const dist = vecDistance(p, q);
     if (dist < best.distance) best = { segmentIndex: i, t, point: q, distance: dist };
   });
+  if (memo.size < 4096) memo.set(key, best);
   return best;
 }
+
+/** contourNearest results by contour object, then by point (held weakly, bounded per contour). */
+const NEAREST_CACHE = new WeakMap<Contour, Map<string, ContourLocation & { readonly distance: number }>>();
 
 /** All places where the contour meets an infinite line, in contour order. */
 export function contourLineIntersections(c: Contour, origin: Point, direction: Point): ContourLocation[] {
@@ -705,7 +743,8 @@ export function contourStretch(c: Contour, a: { segmentIndex: number; t: number 
   const segs = c.segments;
   const out: Segment[] = [];
   const push = (s: Segment): void => {
-    if (segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
+    // arc length ≥ chord: a chord ten times POINT_EPSILON settles it without the quadrature
+    if (vecDistance(s.from, s.to) > 10 * POINT_EPSILON || segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
   };
   const cmp = compareLoc(a, b);
   if (cmp < 0 || (cmp === 0 && !c.closed)) {

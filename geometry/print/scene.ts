@@ -205,9 +205,26 @@ function nearestDistance(poly: readonly Point[], p: Point): number {
   return Number.isFinite(d) ? d : 6;
 }
 
-/** All pieces of a plan, in content coordinates. */
-export function contentMarks(plan: PrintPlan, words: SceneText): Mark[] {
-  return plan.layout.placements.flatMap((pl) => pieceMarks(plan.pieces[pl.index]!, pl.transform, plan.polygons[pl.index]!, words));
+/** One piece's marks with a box (content coordinates) that holds them all. */
+export interface MarkGroup {
+  readonly box: Rect;
+  readonly marks: readonly Mark[];
+}
+
+/** How far marks may reach outside a piece's outer line (notch ticks, stroke widths), mm. */
+export const MARK_REACH = 2;
+
+/** All pieces of a plan, in content coordinates, one group per piece. */
+export function contentMarks(plan: PrintPlan, words: SceneText): MarkGroup[] {
+  return plan.layout.placements.map((pl) => ({
+    box: { x: pl.box.x - MARK_REACH, y: pl.box.y - MARK_REACH, width: pl.box.width + 2 * MARK_REACH, height: pl.box.height + 2 * MARK_REACH },
+    marks: pieceMarks(plan.pieces[pl.index]!, pl.transform, plan.polygons[pl.index]!, words),
+  }));
+}
+
+/** Do two rectangles overlap (closed)? */
+export function rectsMeet(a: Rect, b: Rect): boolean {
+  return a.x <= b.x + b.width && b.x <= a.x + a.width && a.y <= b.y + b.height && b.y <= a.y + a.height;
 }
 
 /** A scale bar: 5 cm with 1 cm ticks over a 2 in bar with ½ in ticks; `at` is its top left. */
@@ -248,6 +265,8 @@ export interface PageScene {
   readonly clip: Rect | undefined;
   /** Content marks are drawn through this map (content → sheet); undefined = none. */
   readonly content: Affine | undefined;
+  /** The part of the content this page shows (content coordinates); groups outside it are skipped. */
+  readonly view: Rect | undefined;
   readonly furniture: readonly Mark[];
 }
 
@@ -313,6 +332,7 @@ export function tileScene(plan: TiledPlan, tile: Tile, pageNumber: number, words
     height: grid.sheet.height,
     clip: area,
     content: { a: 1, b: 0, c: 0, d: 1, e: m - tile.area.x, f: m - tile.area.y },
+    view: tile.area,
     furniture: fur,
   };
 }
@@ -360,7 +380,7 @@ export function coverScene(plan: TiledPlan, words: SceneText): PageScene {
   });
   const emptyList = plan.empty.map((t) => t.label).join(', ');
   fur.push(text({ x: x0, y: H - m - 10 }, plan.empty.length ? `Left out, no pattern on them (greyed): ${emptyList}` : 'No page is left out.', 3));
-  return { width: W, height: H, clip: { x: m, y: m, width: W - 2 * m, height: H - 2 * m }, content: undefined, furniture: fur };
+  return { width: W, height: H, clip: { x: m, y: m, width: W - 2 * m, height: H - 2 * m }, content: undefined, view: undefined, furniture: fur };
 }
 
 /** One sheet with everything: header (title, squares, instruction, scale bar) above the pieces. */
@@ -385,5 +405,5 @@ export function sheetScene(plan: PrintPlan, words: SceneText): PageScene {
     ...testSquares({ x: x0, y: m + 17 }),
     ...scaleBar({ x: x0 + 100, y: m + 40 }),
   ];
-  return { width, height, clip: { x: m, y: m, width: width - 2 * m, height: height - 2 * m }, content: { a: 1, b: 0, c: 0, d: 1, e: origin.x, f: origin.y }, furniture: fur };
+  return { width, height, clip: { x: m, y: m, width: width - 2 * m, height: height - 2 * m }, content: { a: 1, b: 0, c: 0, d: 1, e: origin.x, f: origin.y }, view: undefined, furniture: fur };
 }

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Cubic, type Point, contourFlatten, cubicFlattenTimes, cubicPoint, cubicSplit, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, contourFlatten, contourNearest, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, pathFromSvg, pathToSvg, smoothThrough } from '../../geometry/index.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
@@ -90,6 +90,70 @@ describe('smoothThrough (fast merge test)', () => {
         }
       }),
       { numRuns: 60 },
+    );
+  });
+});
+
+describe('pathToSvg numbers (fast decimal printing)', () => {
+  it('prints what String() prints for the rounded value, and reads back to it', () => {
+    const value = fc.oneof(
+      fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+      fc.integer({ min: -1_000_000_000, max: 1_000_000_000 }).map((n) => n / 1e6 + 5e-7), // near the rounding boundary
+      fc.double({ min: -1e-5, max: 1e-5, noNaN: true }),
+    );
+    fc.assert(
+      fc.property(value, value, fc.constantFrom(0, 1, 2, 4, 6), (x, y, decimals) => {
+        const d = pathToSvg([{ closed: false, segments: [{ kind: 'line', from: { x, y }, to: { x: y + 1000, y: x - 1000 } }] }], decimals);
+        const k = 10 ** decimals;
+        const plain = (v: number): string => {
+          const r = Math.round(v * k) / k;
+          return r === 0 ? '0' : String(r);
+        };
+        expect(d).toBe(`M${plain(x)} ${plain(y)} L${plain(y + 1000)} ${plain(x - 1000)}`);
+        const back = pathFromSvg(d)[0];
+        if (back) expectPointNear(back.segments[0]!.from, { x: Math.round(x * k) / k, y: Math.round(y * k) / k }, 1e-9);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});
+
+describe('contourNearest (memo)', () => {
+  it('gives the same location as a search over every segment, asked once or twice', () => {
+    const segment = fc.tuple(point, point, fc.boolean());
+    fc.assert(
+      fc.property(point, fc.array(segment, { minLength: 1, maxLength: 6 }), point, (start, parts, p) => {
+        let from = start;
+        const contour: Contour = {
+          closed: false,
+          segments: parts.map(([c, to, straight]) => {
+            const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
+            from = to;
+            return s;
+          }),
+        };
+        // reference: the nearest point of every segment, no pruning
+        let best = Infinity;
+        for (const s of contour.segments) {
+          if (s.kind === 'line') {
+            const dx = s.to.x - s.from.x;
+            const dy = s.to.y - s.from.y;
+            const l2 = dx * dx + dy * dy;
+            const t = l2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s.from.x) * dx + (p.y - s.from.y) * dy) / l2));
+            best = Math.min(best, Math.hypot(p.x - (s.from.x + dx * t), p.y - (s.from.y + dy * t)));
+          } else {
+            const c: Cubic = [s.from, s.c1, s.c2, s.to];
+            const q = cubicPoint(c, cubicNearestTime(c, p));
+            best = Math.min(best, Math.hypot(p.x - q.x, p.y - q.y));
+          }
+        }
+        const once = contourNearest(contour, p);
+        const twice = contourNearest(contour, { x: p.x, y: p.y });
+        expectNear(once.distance, best, 1e-9 * Math.max(1, best));
+        expect(twice.segmentIndex).toBe(once.segmentIndex);
+        expectNear(twice.t, once.t, 0);
+      }),
+      { numRuns: 300 },
     );
   });
 });
