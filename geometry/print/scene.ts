@@ -303,10 +303,10 @@ export function tileScene(plan: TiledPlan, tile: Tile, pageNumber: number, words
     used.has(`${tile.row + dr},${tile.col + dc}`) ? grid.tiles[(tile.row + dr) * grid.cols + tile.col + dc] : undefined;
   const fur: Mark[] = [{ kind: 'path', role: 'frame', d: rectD(area), stroke: STYLE.frame }];
   const sides = [
-    { dr: 0, dc: 1, across: 'x' as const, centre: (k: number) => ({ x: m + w - o / 2, y: m + h * k }), label: { x: m + w - 12, y: m + h / 2 + 1.5 }, anchor: 'end' as const },
-    { dr: 0, dc: -1, across: 'x' as const, centre: (k: number) => ({ x: m + o / 2, y: m + h * k }), label: { x: m + 12, y: m + h / 2 + 1.5 }, anchor: 'start' as const },
-    { dr: 1, dc: 0, across: 'y' as const, centre: (k: number) => ({ x: m + w * k, y: m + h - o / 2 }), label: { x: m + w / 2, y: m + h - 12 }, anchor: 'middle' as const },
-    { dr: -1, dc: 0, across: 'y' as const, centre: (k: number) => ({ x: m + w * k, y: m + o / 2 }), label: { x: m + w / 2, y: m + 15 }, anchor: 'middle' as const },
+    { dr: 0, dc: 1, across: 'x' as const, centre: (k: number) => ({ x: m + w - o / 2, y: m + h * k }), label: { x: m + w - o - 12, y: m + h / 2 + 1.5 }, anchor: 'end' as const },
+    { dr: 0, dc: -1, across: 'x' as const, centre: (k: number) => ({ x: m + o / 2, y: m + h * k }), label: { x: m + o + 12, y: m + h / 2 + 1.5 }, anchor: 'start' as const },
+    { dr: 1, dc: 0, across: 'y' as const, centre: (k: number) => ({ x: m + w * k, y: m + h - o / 2 }), label: { x: m + w / 2, y: m + h - o - 12 }, anchor: 'middle' as const },
+    { dr: -1, dc: 0, across: 'y' as const, centre: (k: number) => ({ x: m + w * k, y: m + o / 2 }), label: { x: m + w / 2, y: m + o + 15 }, anchor: 'middle' as const },
   ];
   for (const s of sides) {
     const n = neighbour(s.dr, s.dc);
@@ -319,8 +319,14 @@ export function tileScene(plan: TiledPlan, tile: Tile, pageNumber: number, words
           : { x: m, y: s.dr > 0 ? m + h - o : m, width: w, height: o };
       fur.push({ kind: 'path', role: 'band', d: rectD(band), stroke: STYLE.band });
     }
-    const arrow = s.dc > 0 ? '→' : s.dc < 0 ? '←' : s.dr > 0 ? '↓' : '↑';
-    const caption = s.dc > 0 || s.dr > 0 ? `joins ${n.label} ${arrow}` : `${arrow} joins ${n.label}`;
+    // Figtree's latin file has no arrow glyphs: a drawn triangle points at the neighbour
+    const dir = { x: s.dc, y: s.dr };
+    const caption = `joins ${n.label}`;
+    const tip =
+      s.across === 'x'
+        ? { x: s.dc > 0 ? s.label.x + 7 : s.label.x - 7, y: s.label.y - 1.2 }
+        : { x: s.label.x, y: s.dr > 0 ? s.label.y + 4 : s.label.y - 8 };
+    fur.push({ kind: 'path', role: 'join-arrow', d: arrowHead(tip, dir, 4), fill: STYLE.join.colour });
     fur.push(text(s.label, caption, 3.6, { bold: true, anchor: s.anchor, colour: STYLE.join.colour }));
   }
   const inset = o + 3;
