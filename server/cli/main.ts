@@ -3,11 +3,12 @@ import path from 'node:path';
 import { projectRoot } from '../config.ts';
 import type { Command } from './command.ts';
 import { alterCommand } from './commands/alter.ts';
+import { exportCommand } from './commands/export.ts';
 import { importCommand } from './commands/import.ts';
 import { measureCommand } from './commands/measure.ts';
 
 /** Commands register here as the engine, print and planner land. */
-const COMMANDS: Command[] = [importCommand, alterCommand, measureCommand];
+const COMMANDS: Command[] = [importCommand, alterCommand, measureCommand, exportCommand];
 
 function version(): string {
   const pkg = JSON.parse(readFileSync(path.join(projectRoot, 'package.json'), 'utf8')) as { version: string };

@@ -1,0 +1,150 @@
+/**
+ * The print PDF, written with pdfkit: pages at the paper's size in PDF points (1/72 in,
+ * UserUnit 1, ISO 32000-1 user space), drawn in millimetres through one scale per page, and
+ * ViewerPreferences /PrintScaling /None. Tiled paper: page 1 = test squares + assembly map, then
+ * one page per tile in use (only the pieces that reach a tile are written on its page). Large
+ * format: one sheet with everything. Text is Figtree glyph outlines, each glyph written once as a
+ * form XObject and placed where it is used (see fonts.ts for why not an embedded font).
+ */
+import PDFDocument from 'pdfkit';
+import {
+  type Mark,
+  type MarkGroup,
+  type PageScene,
+  type PrintPlan,
+  type SceneText,
+  PT_PER_MM,
+  contentMarks,
+  coverScene,
+  rectsMeet,
+  sheetScene,
+  tileScene,
+} from '../../../geometry/print/index.ts';
+import { glyphBounds, glyphPdfPath, layoutText } from './fonts.ts';
+
+/** pdfkit internals used here: raw content, page resources, the catalog. */
+interface PdfInternals {
+  addContent(data: string): unknown;
+  page: { xobjects: Record<string, unknown> };
+  _root: { data: Record<string, unknown> };
+}
+
+const f = (v: number): string => String(Math.round(v * 10000) / 10000);
+
+class Writer {
+  private readonly glyphs = new Map<number, { name: string; ref: unknown }>();
+  private readonly raw: PdfInternals;
+
+  constructor(readonly doc: PDFKit.PDFDocument) {
+    this.raw = doc as unknown as PdfInternals;
+  }
+
+  private glyph(id: number): string {
+    let g = this.glyphs.get(id);
+    if (!g) {
+      const [x0, y0, x1, y1] = glyphBounds(id);
+      const pad = 60;
+      const ref = this.doc.ref({ Type: 'XObject', Subtype: 'Form', BBox: [x0 - pad, y0 - pad, x1 + pad, y1 + pad], Resources: {} }) as unknown as { end(data: string): void };
+      // fill and stroke (nonzero): the stroke width and colours come from the page's state
+      ref.end(`${glyphPdfPath(id)}\nB`);
+      g = { name: `Gl${id}`, ref };
+      this.glyphs.set(id, g);
+    }
+    this.raw.page.xobjects[g.name] = g.ref;
+    return g.name;
+  }
+
+  marks(marks: readonly Mark[]): void {
+    const doc = this.doc;
+    for (const m of marks) {
+      switch (m.kind) {
+        case 'path':
+          if (!m.d) break;
+          doc.path(m.d);
+          if (m.fill && m.stroke) {
+            this.stroke(m.stroke);
+            doc.fillAndStroke(m.fill, m.stroke.colour);
+          } else if (m.fill) doc.fillColor(m.fill).fill();
+          else if (m.stroke) {
+            this.stroke(m.stroke);
+            doc.stroke();
+          }
+          break;
+        case 'square':
+          // a plain rectangle (PDF `re`), so a reader can measure it
+          this.stroke(m.stroke);
+          doc.rect(m.x, m.y, m.side, m.side).stroke();
+          break;
+        case 'clip':
+          doc.save();
+          doc.path(m.d).clip();
+          this.marks(m.marks);
+          doc.restore();
+          break;
+        case 'text': {
+          const run = layoutText(m.text, m.at.x, m.at.y, m.size, m.bold, m.anchor);
+          if (run.glyphs.length === 0) break;
+          doc.fillColor(m.colour).strokeColor(m.colour).lineJoin('round').undash();
+          const k = f(run.scale);
+          const parts = run.glyphs.map((g) => `q ${k} 0 0 -${k} ${f(g.x)} ${f(g.y)} cm ${f(run.strokeUnits)} w /${this.glyph(g.id)} Do Q`);
+          this.raw.addContent(parts.join('\n'));
+          break;
+        }
+      }
+    }
+  }
+
+  private stroke(s: { width: number; colour: string; dash?: readonly number[] }): void {
+    this.doc.lineWidth(s.width).strokeColor(s.colour).lineJoin('round').lineCap('butt');
+    // pdfkit takes a dash array at run time; its type declaration lists only a single length
+    if (s.dash && s.dash.length) (this.doc.dash as unknown as (pattern: number[], options: object) => void).call(this.doc, [...s.dash], {});
+    else this.doc.undash();
+  }
+
+  page(scene: PageScene, groups: readonly MarkGroup[]): void {
+    const doc = this.doc;
+    doc.addPage({ size: [scene.width * PT_PER_MM, scene.height * PT_PER_MM], margin: 0 });
+    doc.save();
+    doc.scale(PT_PER_MM);
+    if (scene.clip) doc.rect(scene.clip.x, scene.clip.y, scene.clip.width, scene.clip.height).clip();
+    if (scene.content) {
+      doc.save();
+      const c = scene.content;
+      doc.transform(c.a, c.b, c.c, c.d, c.e, c.f);
+      for (const g of groups) if (!scene.view || rectsMeet(g.box, scene.view)) this.marks(g.marks);
+      doc.restore();
+    }
+    this.marks(scene.furniture);
+    doc.restore();
+  }
+}
+
+/** Render a plan to one PDF. */
+export async function renderPdf(plan: PrintPlan, words: SceneText): Promise<Buffer> {
+  const doc = new PDFDocument({
+    autoFirstPage: false,
+    margin: 0,
+    compress: true,
+    pdfVersion: '1.7',
+    info: { Title: words.title, Creator: 'Blockwright', Producer: 'Blockwright (pdfkit)' },
+  });
+  // ViewerPreferences /PrintScaling /None (ISO 32000-1 Table 150): the print dialog starts at no scaling.
+  (doc as unknown as PdfInternals)._root.data.ViewerPreferences = doc.ref({ PrintScaling: 'None' });
+  const chunks: Buffer[] = [];
+  doc.on('data', (c: Buffer) => chunks.push(c));
+  const done = new Promise<void>((resolve, reject) => {
+    doc.on('end', resolve);
+    doc.on('error', reject);
+  });
+  const w = new Writer(doc);
+  const groups = contentMarks(plan, words);
+  if (plan.format === 'single') {
+    w.page(sheetScene(plan, words), groups);
+  } else {
+    w.page(coverScene(plan, words), groups);
+    plan.used.forEach((tile, i) => w.page(tileScene(plan, tile, i + 2, words), groups));
+  }
+  doc.end();
+  await done;
+  return Buffer.concat(chunks);
+}
