@@ -11,7 +11,7 @@ import { affineApply } from '../vec.ts';
 import { polygonMeetsRect } from './empty.ts';
 import { PrintError } from './errors.ts';
 import { type Tile, type TileGrid, tileGrid } from './grid.ts';
-import { type Layout, outerPolygon, shelfLayout } from './layout.ts';
+import { type Layout, outerPolygon, shelfLayout, turnedBounds } from './layout.ts';
 import { type Orientation, type Paper, DEFAULT_MARGIN, PAPERS, type PaperId, paperSheet } from './paper.ts';
 import { type PrintPiece, printPieces } from './pieces.ts';
 
@@ -136,9 +136,10 @@ export function planPrint(pattern: Pattern, input: Partial<PrintOptions> = {}): 
     // Validates margin and overlap for this paper (throws PrintError with the reason).
     tileGrid({ width: 1, height: 1 }, paper, orientation, margin, overlap);
     const step = printable - overlap;
-    const totalWidth = base.reduce((s, poly) => {
-      const xs = poly.map((p) => p.x);
-      return s + Math.max(...xs) - Math.min(...xs) + spacing;
+    // the widest a shelf need be: all pieces side by side, grain vertical
+    const totalWidth = pieces.reduce((s, piece) => {
+      const b = turnedBounds(piece, 0);
+      return s + b.maxX - b.minX + spacing;
     }, 2 * LAYOUT_PADDING);
     const maxCols = Math.min(16, Math.max(1, Math.ceil(totalWidth / step) + 1));
     const turnSets = options.allowRotate90 ? [pieces.map(() => false), quarterTurn] : [quarterTurn];

@@ -249,10 +249,10 @@ export function testSquares(at: Point): Mark[] {
   const out: Mark[] = [
     text({ x: at.x, y: at.y + 4 }, SCALE_INSTRUCTION, 3.4, { bold: true, colour: CAUTION_INK }),
     { kind: 'square', x: at.x, y: at.y + 8, side: inch, stroke: STYLE.testSquare },
-    text({ x: at.x + inch / 2, y: at.y + 8 + inch / 2 + 1.5 }, '1 in', 4, { bold: true, anchor: 'middle', colour: STYLE.testSquare.colour }),
+    text({ x: at.x + inch / 2, y: at.y + 8 + inch / 2 + 1.5 }, '1 in', 4, { bold: true, anchor: 'middle', colour: INK }),
     text({ x: at.x + inch / 2, y: at.y + 8 + inch + 5 }, '1 in × 1 in', 2.8, { anchor: 'middle' }),
     { kind: 'square', x: at.x + inch + 12, y: at.y + 8, side: 50, stroke: STYLE.testSquare },
-    text({ x: at.x + inch + 37, y: at.y + 35 }, '5 cm', 5, { bold: true, anchor: 'middle', colour: STYLE.testSquare.colour }),
+    text({ x: at.x + inch + 37, y: at.y + 35 }, '5 cm', 5, { bold: true, anchor: 'middle', colour: INK }),
     text({ x: at.x + inch + 37, y: at.y + 41 }, '5 cm × 5 cm', 2.8, { anchor: 'middle' }),
   ];
   return out;
