@@ -227,6 +227,10 @@ function arcToCubics(
  * Throws PathDataError for unreadable data or non-finite numbers.
  */
 export function pathFromSvg(d: string): Path {
+  if (deferred && d.startsWith(DEFERRED_PREFIX)) {
+    const entry = deferred.texts.get(d);
+    if (entry) return entry.read;
+  }
   const cached = PARSE_CACHE.get(d);
   if (cached) return cached;
   const path = readPath(d);
@@ -247,7 +251,11 @@ const PARSE_CACHE_SIZE = 4096;
 const PARSE_CACHE_MAX_LENGTH = 500_000;
 
 function readPath(d: string): Path {
-  const commands = fastCommands(d) ?? libraryCommands(d);
+  return buildPath(fastCommands(d) ?? libraryCommands(d));
+}
+
+/** The contours of a list of absolute commands (the second half of reading path data). */
+function buildPath(commands: readonly RawCommand[]): Path {
   const contours: Contour[] = [];
   let segments: Segment[] = [];
   let start: Point | null = null;
@@ -427,6 +435,18 @@ const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
 export function pathToSvg(path: Path, decimals = 4): string {
+  if (deferred) {
+    const read = readBackOf(path, decimals);
+    if (read) {
+      const token = `${DEFERRED_PREFIX}${deferred.run}:${deferred.texts.size}`;
+      deferred.texts.set(token, { path, decimals, read });
+      return token;
+    }
+  }
+  return writePath(path, decimals);
+}
+
+function writePath(path: Path, decimals: number): string {
   const parts: string[] = [];
   for (const c of path) {
     if (c.segments.length === 0) continue;
@@ -440,6 +460,70 @@ export function pathToSvg(path: Path, decimals = 4): string {
     if (c.closed) parts.push('Z');
   }
   return parts.join(' ');
+}
+
+// ------------------------------------------------------- deferred writing (applyOps)
+
+/**
+ * While `pathTextDeferred` runs, pathToSvg does not print: it hands out a placeholder that
+ * pathFromSvg reads back as exactly the path that printing and reading the text would give
+ * (the same rounding to `decimals`, the same reading rules), and the real text is printed once
+ * at the end. A replayed list of operations thus stops printing and re-reading every outline
+ * it changes between one operation and the next, with the very same results.
+ */
+interface DeferredRun {
+  readonly run: number;
+  readonly texts: Map<string, { readonly path: Path; readonly decimals: number; readonly read: Path }>;
+}
+let deferred: DeferredRun | undefined;
+let deferredRuns = 0;
+const DEFERRED_PREFIX = '\u0000path:';
+
+/**
+ * Run `body` with path printing deferred; `body` gets `resolve`, which turns a placeholder back
+ * into its text (other strings come back unchanged), and must resolve every string it returns.
+ * Nested calls run inside the outer one. Any text that already looks like a placeholder (never
+ * valid path data) turns deferral off, so such input fails exactly as it would without it.
+ */
+export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string) => T): T {
+  if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d);
+  const run: DeferredRun = { run: ++deferredRuns, texts: new Map() };
+  deferred = run;
+  try {
+    return body((d) => {
+      const entry = d.startsWith(DEFERRED_PREFIX) ? run.texts.get(d) : undefined;
+      return entry ? writePath(entry.path, entry.decimals) : d;
+    });
+  } finally {
+    deferred = undefined;
+  }
+}
+
+/**
+ * What pathFromSvg(pathToSvg(path, decimals)) gives, without the text: the same commands with
+ * each number rounded as fmt rounds it (a printed number reads back as exactly n / 10^decimals),
+ * read by the same rules. Undefined for non-finite numbers (their text fails differently).
+ */
+function readBackOf(path: Path, decimals: number): Path | undefined {
+  const k = POW10[decimals] ?? 10 ** decimals;
+  let finite = true;
+  const r = (v: number): number => {
+    const n = Math.round(v * k);
+    if (!Number.isFinite(n)) finite = false;
+    return n === 0 ? 0 : n / k;
+  };
+  const commands: RawCommand[] = [];
+  for (const c of path) {
+    if (c.segments.length === 0) continue;
+    const first = c.segments[0]!;
+    commands.push({ c: 'M', v: [r(first.from.x), r(first.from.y)] });
+    c.segments.forEach((s, i) => {
+      if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return; // Z draws it
+      commands.push(s.kind === 'line' ? { c: 'L', v: [r(s.to.x), r(s.to.y)] } : { c: 'C', v: [r(s.c1.x), r(s.c1.y), r(s.c2.x), r(s.c2.y), r(s.to.x), r(s.to.y)] });
+    });
+    if (c.closed) commands.push({ c: 'Z', v: [] });
+  }
+  return finite ? buildPath(commands) : undefined;
 }
 
 /** A contour through the given points joined by straight lines. Fewer than 2 points give an empty contour. */

@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import type { Pattern } from '../model.ts';
+import { pathTextDeferred } from '../path.ts';
 import { type BlendOp, blendOpSchema, performBlend } from './blend.ts';
 import { AlterationError, type Caution, type OpResult } from './common.ts';
 import { type GirthOp, girthOpSchema, performGirth } from './girth.ts';
@@ -50,6 +51,51 @@ export interface AppliedCaution extends Caution {
  * in the message) for the first operation that is refused or malformed.
  */
 export function applyOps(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; cautions: AppliedCaution[] } {
+  // Path text is printed once, at the end, not between operations (see pathTextDeferred).
+  return pathTextDeferred(patternTexts(pattern), (resolve) => {
+    const r = replay(pattern, ops);
+    return { pattern: resolveTexts(r.pattern, resolve), cautions: r.cautions };
+  });
+}
+
+function patternTexts(pattern: Pattern): string[] {
+  const out: string[] = [];
+  for (const piece of pattern.pieces) {
+    for (const o of piece.outlines) {
+      out.push(o.d);
+      if (o.cut !== undefined) out.push(o.cut);
+    }
+    for (const l of piece.lines) out.push(l.d);
+  }
+  return out;
+}
+
+/** Replace every placeholder of deferred path text by its text; untouched parts stay the same objects. */
+function resolveTexts(pattern: Pattern, resolve: (d: string) => string): Pattern {
+  let piecesChanged = false;
+  const pieces = pattern.pieces.map((piece) => {
+    let changed = false;
+    const outlines = piece.outlines.map((o) => {
+      const d = resolve(o.d);
+      const cut = o.cut === undefined ? undefined : resolve(o.cut);
+      if (d === o.d && cut === o.cut) return o;
+      changed = true;
+      return { ...o, d, ...(cut !== undefined ? { cut } : {}) };
+    });
+    const lines = piece.lines.map((l) => {
+      const d = resolve(l.d);
+      if (d === l.d) return l;
+      changed = true;
+      return { ...l, d };
+    });
+    if (!changed) return piece;
+    piecesChanged = true;
+    return { ...piece, outlines, lines };
+  });
+  return piecesChanged ? { ...pattern, pieces } : pattern;
+}
+
+function replay(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; cautions: AppliedCaution[] } {
   let current = pattern;
   const cautions: AppliedCaution[] = [];
   ops.forEach((raw, index) => {

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, contourFlatten, contourNearest, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, pathFromSvg, pathToSvg, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourNearest, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, parsePattern, pathFromSvg, pathToSvg, performOp, smoothThrough } from '../../geometry/index.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
@@ -155,5 +155,52 @@ describe('contourNearest (memo)', () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe('applyOps (path text printed once, at the end)', () => {
+  const base = applyOps(demoPattern(), [{ op: 'blend', levels: [{ level: 'waist', size: '4' }, { level: 'knee', size: '10' }] }]).pattern;
+  const op = fc.oneof(
+    fc.record({ op: fc.constant('lengthen'), line: fc.constantFrom('upper leg', 'lower leg'), amount: fc.double({ min: -80, max: 80, noNaN: true }) }),
+    fc.record({ op: fc.constant('rise'), line: fc.constant('rise'), amount: fc.double({ min: -30, max: 60, noNaN: true }) }),
+    fc.record({ op: fc.constant('girth'), edge: fc.constantFrom('side-seam', 'inseam'), level: fc.constantFrom('hip', 'thigh', 'knee', 'waist'), amount: fc.double({ min: -30, max: 30, noNaN: true }) }),
+    fc.record({ op: fc.constant('shrinkage'), lengthwise: fc.double({ min: -5, max: 10, noNaN: true }), crosswise: fc.double({ min: -5, max: 10, noNaN: true }) }),
+    fc.record({ op: fc.constant('seam-allowance'), width: fc.double({ min: 0, max: 25, noNaN: true }) }),
+  );
+
+  it('gives exactly what performing the operations one by one gives, text and all, or the same refusal', () => {
+    fc.assert(
+      fc.property(fc.array(op, { minLength: 1, maxLength: 4 }), (ops) => {
+        let stepwise: string;
+        try {
+          let current = base;
+          const cautions: unknown[] = [];
+          ops.forEach((o, index) => {
+            const r = performOp(current, o);
+            current = r.pattern;
+            for (const c of r.cautions) cautions.push({ ...c, op: index });
+          });
+          stepwise = JSON.stringify({ pattern: current, cautions });
+        } catch (error) {
+          stepwise = `refused: ${(error as Error).message}`;
+        }
+        let replayed: string;
+        try {
+          replayed = JSON.stringify(applyOps(base, ops));
+        } catch (error) {
+          replayed = `refused: ${(error as Error).message}`;
+        }
+        if (stepwise.startsWith('refused')) expect(replayed.startsWith('refused')).toBe(true);
+        else expect(replayed).toBe(stepwise);
+        // every path in the result is real path data
+        if (!replayed.startsWith('refused')) parsePattern(JSON.parse(replayed).pattern);
+      }),
+      { numRuns: 15 },
+    );
+  });
+
+  it('refuses text that looks like its own placeholder as unreadable path data, as before', () => {
+    const bad = { ...base, pieces: base.pieces.map((p, i) => (i === 0 ? { ...p, lines: p.lines.map((l) => (l.role === 'grain' ? { ...l, d: '\u0000path:1:0' } : l)) } : p)) };
+    expect(() => applyOps(bad, [{ op: 'shrinkage', lengthwise: 3, crosswise: 2 }])).toThrow(/path data/);
   });
 });
