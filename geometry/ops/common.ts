@@ -124,21 +124,32 @@ export function bandMapPoint(m: BandMap, p: Point): Point {
 
 /** Split a segment at every cut line and map each part with its band's affine map (exact). */
 export function bandMapSegment(m: BandMap, s: Segment): Segment[] {
+  return mapSegmentAt(m, s, cutsOf(m, s));
+}
+
+/** Where a segment meets each cut line, per cut line. */
+function cutsOf(m: BandMap, s: Segment): number[][] {
+  return m.breaks.map((b) => segmentLineIntersections(s, m.lineAt(b), m.direction));
+}
+
+function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
   const ts: number[] = [];
-  for (const b of m.breaks) ts.push(...segmentLineIntersections(s, m.lineAt(b), m.direction));
+  for (const c of cuts) ts.push(...c);
   return segmentSplitAt(s, ts).map((part) => segmentTransform(part, m.maps[bandIndex(m, m.coordinate(segmentPoint(part, 0.5)))]!));
 }
 
 /** Map a path; returns the very same path when every part lies in an identity band (nothing moves). */
 export function bandMapPath(m: BandMap, path: Path): Path {
-  const untouched = path.every((c) =>
-    c.segments.every((s) => {
-      for (const b of m.breaks) if (segmentLineIntersections(s, m.lineAt(b), m.direction).some((t) => t > 1e-9 && t < 1 - 1e-9)) return false;
+  // the cut-line intersections of each segment, found once for the test and for the mapping
+  const cuts = path.map((c) => c.segments.map((s) => cutsOf(m, s)));
+  const untouched = path.every((c, ci) =>
+    c.segments.every((s, si) => {
+      for (const ts of cuts[ci]![si]!) if (ts.some((t) => t > 1e-9 && t < 1 - 1e-9)) return false;
       return m.maps[bandIndex(m, m.coordinate(segmentPoint(s, 0.5)))] === AFFINE_IDENTITY;
     }),
   );
   if (untouched) return path;
-  return path.map((c) => ({ closed: c.closed, segments: c.segments.flatMap((s) => bandMapSegment(m, s)) }));
+  return path.map((c, ci) => ({ closed: c.closed, segments: c.segments.flatMap((s, si) => mapSegmentAt(m, s, cuts[ci]![si]!)) }));
 }
 
 /** Map path data; the same text comes back when the map returns the same path (nothing moved). */

@@ -86,9 +86,12 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
 function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRotate>): Segment[] {
   const len = segmentLength(s, 1e-3);
   const k = Math.max(2, Math.ceil(len / 2));
-  const probe = Array.from({ length: k + 1 }, (_, i) => m.region(segmentPoint(s, i / k)));
-  if (probe.every((r) => r === 0)) return [s];
-  if (probe.every((r) => r === 1)) return [segmentTransform(s, rigid)];
+  // probe until the regions differ (or one is the zone): then the segment is redrawn
+  const first = m.region(segmentPoint(s, 0));
+  let uniform = first !== 2;
+  for (let i = 1; i <= k && uniform; i++) uniform = m.region(segmentPoint(s, i / k)) === first;
+  if (uniform && first === 0) return [s];
+  if (uniform && first === 1) return [segmentTransform(s, rigid)];
   const n = Math.max(2, Math.ceil(len / 3));
   return smoothThrough(Array.from({ length: n + 1 }, (_, i) => m.map(segmentPoint(s, i / n))));
 }

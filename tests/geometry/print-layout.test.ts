@@ -53,6 +53,20 @@ function piecesFrom(polys: RandomPolygon[]): Pattern {
   });
 }
 
+/** Least distance from any vertex of a to any edge of b (with the reverse, the polygons' distance when they do not cross). */
+function polygonDistance(a: readonly { x: number; y: number }[], b: readonly { x: number; y: number }[]): number {
+  let d = Infinity;
+  for (const p of a)
+    for (let k = 0; k < b.length; k++) {
+      const u = b[k]!;
+      const v = b[(k + 1) % b.length]!;
+      const len2 = (v.x - u.x) ** 2 + (v.y - u.y) ** 2;
+      const t = len2 > 0 ? Math.max(0, Math.min(1, ((p.x - u.x) * (v.x - u.x) + (p.y - u.y) * (v.y - u.y)) / len2)) : 0;
+      d = Math.min(d, Math.hypot(p.x - (u.x + t * (v.x - u.x)), p.y - (u.y + t * (v.y - u.y))));
+    }
+  return d;
+}
+
 const flat = (d: string) => contourFlatten(pathFromSvg(d)[0]!, 0.05).map((f) => f.point);
 const inRect = (p: { x: number; y: number }, r: Rect, eps = 1e-6) => p.x >= r.x - eps && p.x <= r.x + r.width + eps && p.y >= r.y - eps && p.y <= r.y + r.height + eps;
 
@@ -65,19 +79,21 @@ function placedOutlinePoints(pattern: Pattern, plan: TiledPlan) {
 }
 
 describe('shelf layout (property)', () => {
-  it('pieces do not overlap, stay in the layout box, and keep their grainline vertical', () => {
+  it('pieces do not overlap (they keep the spacing apart), stay in the layout box, and keep their grainline vertical', () => {
     fc.assert(
       fc.property(fc.array(polygonArb, { minLength: 1, maxLength: 7 }), fc.boolean(), (polys, quarter) => {
         const pattern = piecesFrom(polys);
         const pieces = printPieces(pattern);
         const layout = shelfLayout(pieces, { width: 2000, spacing: 10, padding: 4, quarterTurn: pieces.map(() => quarter) });
-        const boxes = layout.placements.map((pl) => pl.box);
-        for (let i = 0; i < boxes.length; i++)
-          for (let j = i + 1; j < boxes.length; j++) {
-            const a = boxes[i]!;
-            const b = boxes[j]!;
-            const apart = a.x + a.width + 10 - 1e-6 <= b.x || b.x + b.width + 10 - 1e-6 <= a.x || a.y + a.height + 10 - 1e-6 <= b.y || b.y + b.height + 10 - 1e-6 <= a.y;
-            expect(apart, `pieces ${i} and ${j} are closer than the spacing`).toBe(true);
+        // pieces keep at least the spacing apart (exact distance between the placed flattened outer lines)
+        const placed = layout.placements.map((pl) => {
+          const o = pattern.pieces[pl.index]!.outlines[0]!;
+          return flat(o.cut ?? o.d).map((p) => affineApply(pl.transform, p));
+        });
+        for (let i = 0; i < placed.length; i++)
+          for (let j = i + 1; j < placed.length; j++) {
+            const gap = Math.min(polygonDistance(placed[i]!, placed[j]!), polygonDistance(placed[j]!, placed[i]!));
+            expect(gap, `pieces ${i} and ${j} are ${gap} mm apart`).toBeGreaterThanOrEqual(10 - 0.1);
           }
         layout.placements.forEach((pl) => {
           const piece = pattern.pieces[pl.index]!;
