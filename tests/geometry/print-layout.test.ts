@@ -10,6 +10,7 @@ import {
   PrintError,
   type Rect,
   planPrint,
+  pointInPolygon,
   polygonMeetsRect,
   printPieces,
   segmentMeetsRect,
@@ -94,6 +95,7 @@ describe('shelf layout (property)', () => {
           for (let j = i + 1; j < placed.length; j++) {
             const gap = Math.min(polygonDistance(placed[i]!, placed[j]!), polygonDistance(placed[j]!, placed[i]!));
             expect(gap, `pieces ${i} and ${j} are ${gap} mm apart`).toBeGreaterThanOrEqual(10 - 0.1);
+            expect(pointInPolygon(placed[i]![0]!, placed[j]!) || pointInPolygon(placed[j]![0]!, placed[i]!), 'one piece inside another').toBe(false);
           }
         layout.placements.forEach((pl) => {
           const piece = pattern.pieces[pl.index]!;
