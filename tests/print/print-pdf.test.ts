@@ -167,8 +167,10 @@ describe('large-format PDF', () => {
     const cuts = page.paths.filter(isCut).map((p) => bounds(p.segments.flatMap((s) => sampleSegment(s, 0.25))));
     let checked = 0;
     for (const [i, piece] of blended.pieces.entries()) {
-      // pieces drawn with their grain along y keep their pattern-space bounds (the waistband is turned a quarter)
-      if (roll.plan.pieces[i]!.grainTurn !== 0 || roll.plan.layout.placements[i]!.turn !== 0) continue;
+      // pieces drawn with their grain along y, upright or turned 180°, keep the size of their
+      // pattern-space bounds (the waistband is drawn with its grain along x, so it lies turned a quarter)
+      const turn = roll.plan.layout.placements[i]!.turn;
+      if (roll.plan.pieces[i]!.grainTurn !== 0 || (turn !== 0 && turn !== 180)) continue;
       checked++;
       const b = contourBounds(pathFromSvg(piece.outlines[0]!.cut!)[0]!);
       const w = (b.maxX - b.minX) * PT_PER_MM;
