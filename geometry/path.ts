@@ -229,7 +229,7 @@ function arcToCubics(
 export function pathFromSvg(d: string): Path {
   if (deferred && d.startsWith(DEFERRED_PREFIX)) {
     const entry = deferred.texts.get(d);
-    if (entry) return entry.read;
+    if (entry) return (entry.read ??= readBackOf(entry.path, entry.decimals));
   }
   const cached = PARSE_CACHE.get(d);
   if (cached) return cached;
@@ -435,13 +435,10 @@ const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
 export function pathToSvg(path: Path, decimals = 4): string {
-  if (deferred) {
-    const read = readBackOf(path, decimals);
-    if (read) {
-      const token = `${DEFERRED_PREFIX}${deferred.run}:${deferred.texts.size}`;
-      deferred.texts.set(token, { path, decimals, read });
-      return token;
-    }
+  if (deferred && allFinite(path, decimals)) {
+    const token = `${DEFERRED_PREFIX}${deferred.run}:${deferred.texts.size}`;
+    deferred.texts.set(token, { path, decimals, read: undefined });
+    return token;
   }
   return writePath(path, decimals);
 }
@@ -473,7 +470,8 @@ function writePath(path: Path, decimals: number): string {
  */
 interface DeferredRun {
   readonly run: number;
-  readonly texts: Map<string, { readonly path: Path; readonly decimals: number; readonly read: Path }>;
+  /** `read` is made when first asked for: text printed by the last operation is never read back. */
+  readonly texts: Map<string, { readonly path: Path; readonly decimals: number; read: Path | undefined }>;
 }
 let deferred: DeferredRun | undefined;
 let deferredRuns = 0;
@@ -499,17 +497,23 @@ export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d
   }
 }
 
+/** True when every number the path would print stays finite once rounded (other text fails differently when read). */
+function allFinite(path: Path, decimals: number): boolean {
+  const k = POW10[decimals] ?? 10 ** decimals;
+  const ok = (p: Point): boolean => Number.isFinite(Math.round(p.x * k)) && Number.isFinite(Math.round(p.y * k));
+  for (const c of path) for (const s of c.segments) if (!ok(s.from) || !ok(s.to) || (s.kind === 'cubic' && (!ok(s.c1) || !ok(s.c2)))) return false;
+  return true;
+}
+
 /**
  * What pathFromSvg(pathToSvg(path, decimals)) gives, without the text: the same commands with
  * each number rounded as fmt rounds it (a printed number reads back as exactly n / 10^decimals),
- * read by the same rules. Undefined for non-finite numbers (their text fails differently).
+ * read by the same rules. For finite numbers only (see allFinite).
  */
-function readBackOf(path: Path, decimals: number): Path | undefined {
+function readBackOf(path: Path, decimals: number): Path {
   const k = POW10[decimals] ?? 10 ** decimals;
-  let finite = true;
   const r = (v: number): number => {
     const n = Math.round(v * k);
-    if (!Number.isFinite(n)) finite = false;
     return n === 0 ? 0 : n / k;
   };
   const commands: RawCommand[] = [];
@@ -523,7 +527,7 @@ function readBackOf(path: Path, decimals: number): Path | undefined {
     });
     if (c.closed) commands.push({ c: 'Z', v: [] });
   }
-  return finite ? buildPath(commands) : undefined;
+  return buildPath(commands);
 }
 
 /** A contour through the given points joined by straight lines. Fewer than 2 points give an empty contour. */
