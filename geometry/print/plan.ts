@@ -108,7 +108,11 @@ export function planPrint(pattern: Pattern, input: Partial<PrintOptions> = {}): 
       }
       const height = layout.height + SHEET_HEADER + 2 * margin;
       if (sheet.height !== undefined && height > sheet.height + 1e-9) {
-        lastError = new PrintError('too-large', `the pieces need ${Math.ceil(height)} mm, more than one ${paper.label} sheet (${sheet.height} mm); choose a roll or home-printer paper`);
+        // report the first orientation tried (portrait unless one was chosen)
+        lastError ??= new PrintError(
+          'too-large',
+          `the pieces do not fit on one ${paper.label} sheet: ${orientation}, they need ${Math.ceil(height)} mm of its ${sheet.height} mm; print on a roll or on home-printer paper${options.allowRotate90 ? '' : ', or let pieces lie crosswise'}`,
+        );
         continue;
       }
       return {

@@ -330,6 +330,9 @@ export function tileScene(plan: TiledPlan, tile: Tile, pageNumber: number, words
     fur.push(text(s.label, caption, 3.6, { bold: true, anchor: s.anchor, colour: STYLE.join.colour }));
   }
   const inset = o + 3;
+  // white behind the page label and the scale bar, so pattern lines do not run through them
+  fur.push({ kind: 'path', role: 'label-ground', d: rectD({ x: m + inset - 1.5, y: m + inset - 1, width: 72, height: 17.5 }), fill: '#ffffff' });
+  fur.push({ kind: 'path', role: 'label-ground', d: rectD({ x: m + inset - 1.5, y: m + h - inset - 12.5, width: 68, height: 13 }), fill: '#ffffff' });
   fur.push(text({ x: m + inset, y: m + inset + 9 }, tile.label, 11, { bold: true }));
   fur.push(text({ x: m + inset, y: m + inset + 14 }, `page ${pageNumber} of ${plan.pageCount} · ${words.title}`, 2.8));
   fur.push(...scaleBar({ x: m + inset, y: m + h - inset - 12 }));

@@ -6,7 +6,9 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { contourLength, demoPattern, outlineContour, parsePattern } from '../../geometry/index.ts';
+import { applyOps, contourLength, demoPattern, outlineContour, parsePattern } from '../../geometry/index.ts';
+import { readPdf } from '../print/pdf-reader.ts';
+import { BLEND } from '../bench/alterations.ts';
 import { writeD6673 } from '../geometry/d6673-writer.ts';
 import { projectRoot } from '../../server/config.ts';
 
@@ -38,7 +40,7 @@ describe('npx blockwright', () => {
   it('when run through npx with --help, then it lists the commands and exits 0', () => {
     const res = spawnSync('npx', ['--no-install', 'blockwright', '--help'], { cwd: projectRoot, encoding: 'utf8' });
     expect(res.status).toBe(0);
-    for (const name of ['import', 'alter', 'measure']) expect(res.stdout).toContain(name);
+    for (const name of ['import', 'alter', 'measure', 'export']) expect(res.stdout).toContain(name);
   });
 
   it('when the command is unknown, then exit 2 with one line on stderr', () => {
@@ -125,5 +127,62 @@ describe('npx blockwright', () => {
     const res = cli('alter', pattern, '--ops', ops);
     expect(res.status).not.toBe(0);
     expect(res.stderr).toMatch(/operation 1/);
+  });
+});
+
+describe('npx blockwright export', () => {
+  const blended = applyOps(demoPattern(), [BLEND, { op: 'seam-allowance', width: 15, edges: { hem: 40 } }]).pattern;
+
+  it('when a blended pattern is exported to PDF on A4, then the file has the pages it reports, each A4 (ISO 216, read with pdfjs-dist), and the left-out pages are listed', async () => {
+    const file = write('blended.json', blended);
+    const out = path.join(dir, 'out', 'blended-a4.pdf');
+    const res = cli('export', file, '--format', 'pdf', '--paper', 'a4', '--out', out);
+    expect(res.status, res.stderr).toBe(0);
+    expect(res.stdout).toBe('');
+    const pages = Number(/^(\d+) pages \(A4/m.exec(res.stderr)?.[1]);
+    expect(res.stderr).toMatch(/left out, no pattern on them: [A-Z]+\d+|no page left out/);
+    expect(res.stderr).toMatch(/100 %/);
+    const read = await readPdf(fs.readFileSync(out));
+    expect(read.numPages).toBe(pages);
+    for (const page of read.pages) expect([Math.round(Math.min(page.view[2]!, page.view[3]!) * 1000) / 1000, Math.round(Math.max(page.view[2]!, page.view[3]!) * 1000) / 1000]).toEqual([595.276, 841.89]);
+  });
+
+  it('when standard output is not a terminal, then the PDF (or SVG) goes there', () => {
+    const file = write('blended2.json', blended);
+    const pdf = spawnSync(process.execPath, [BIN, 'export', file, '--paper', 'roll-914'], { cwd: dir });
+    expect(pdf.status, pdf.stderr.toString()).toBe(0);
+    expect(pdf.stdout.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    expect(pdf.stderr.toString()).toMatch(/1 sheet 914 × \d+ mm/);
+    const svg = cli('export', file, '--format', 'svg', '--paper', 'letter');
+    expect(svg.status, svg.stderr).toBe(0);
+    expect(svg.stdout).toMatch(/<svg [^>]*width="[\d.]+mm" height="[\d.]+mm" viewBox="0 0 /);
+  });
+
+  it('when a size is chosen for an unblended pattern with an overlap band, then it prints; without a size it names the sizes', () => {
+    const file = write('demo-sizes.json', demoPattern());
+    const ok = cli('export', file, '--size', '8', '--overlap', '15', '--margin', '10', '--out', path.join(dir, 'size8.pdf'));
+    expect(ok.status, ok.stderr).toBe(0);
+    const missing = cli('export', file, '--out', path.join(dir, 'none.pdf'));
+    expect(missing.status).not.toBe(0);
+    expect(missing.stderr.trim().split('\n')).toHaveLength(1);
+    expect(missing.stderr).toMatch(/choose one size \(0, 2, 4/);
+    expect(fs.existsSync(path.join(dir, 'none.pdf'))).toBe(false);
+  });
+
+  it('when an option is wrong, then exit non-zero with one line naming it, and no file is written (more cases in tests/print/print-options.test.ts)', () => {
+    const file = write('blended3.json', blended);
+    const cases: [string[], RegExp][] = [
+      [['--paper', 'b5'], /paper/],
+      [['--overlap', 'wide'], /--overlap must be a number/],
+      [['--paper', 'a0'], /do not fit on one A0/],
+    ];
+    for (const [args, message] of cases) {
+      const out = path.join(dir, 'bad.pdf');
+      const res = cli('export', file, ...args, '--out', out);
+      expect(res.status, args.join(' ')).not.toBe(0);
+      expect(res.stderr.trim().split('\n'), args.join(' ')).toHaveLength(1);
+      expect(res.stderr, args.join(' ')).toMatch(message);
+      expect(fs.existsSync(out)).toBe(false);
+    }
   });
 });
