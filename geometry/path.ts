@@ -687,7 +687,8 @@ function segmentsIntersect(a: Point, b: Point, c: Point, d: Point): Point | null
 /**
  * Find places where a contour crosses or touches itself, on its flattening within
  * `tolerance` (so two parts nearer than about `tolerance` may be reported as touching).
- * Neighbouring polyline edges share a vertex and are not reported. Sweep over x.
+ * Neighbouring polyline edges share a vertex and are not reported. Sweep over x (a lean
+ * sweep first asks whether there is anything to list).
  */
 export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCrossing[] {
   const raw = contourFlatten(c, tolerance);
@@ -696,6 +697,9 @@ export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCros
   const n = flat.length;
   const edgeCount = c.closed ? n : n - 1;
   if (edgeCount < 3) return [];
+  // Nearly every outline checked is simple: a lean sweep on typed arrays first says whether any
+  // pair meets (every pair the listing sweep below tests, both ways round); only then list them.
+  if (!mayCross(flat, c.closed, edgeCount)) return [];
   const edges = Array.from({ length: edgeCount }, (_, i) => {
     const a = flat[i]!;
     const b = flat[(i + 1) % n]!;
@@ -716,6 +720,59 @@ export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCros
     active.push(e);
   }
   return out;
+}
+
+/**
+ * True when two non-neighbouring edges of the polyline meet by segmentsIntersect. The sweep
+ * over x of contourSelfCrossings with the same pruning, on typed arrays and collecting nothing.
+ */
+function mayCross(flat: readonly FlatPoint[], closed: boolean, edgeCount: number): boolean {
+  const n = flat.length;
+  const xs = new Float64Array(n);
+  const ys = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    xs[k] = flat[k]!.point.x;
+    ys[k] = flat[k]!.point.y;
+  }
+  const minX = new Float64Array(edgeCount);
+  const maxX = new Float64Array(edgeCount);
+  const minY = new Float64Array(edgeCount);
+  const maxY = new Float64Array(edgeCount);
+  const order = new Int32Array(edgeCount);
+  for (let i = 0; i < edgeCount; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    minX[i] = Math.min(xs[i]!, xs[j]!);
+    maxX[i] = Math.max(xs[i]!, xs[j]!);
+    minY[i] = Math.min(ys[i]!, ys[j]!);
+    maxY[i] = Math.max(ys[i]!, ys[j]!);
+    order[i] = i;
+  }
+  order.sort((p, q) => minX[p]! - minX[q]!);
+  const active = new Int32Array(edgeCount);
+  let count = 0;
+  const at = (k: number): Point => flat[k]!.point;
+  for (const e of order) {
+    const left = minX[e]! - 1e-12;
+    let kept = 0;
+    for (let j = 0; j < count; j++) {
+      const o = active[j]!;
+      if (!(maxX[o]! < left)) active[kept++] = o;
+    }
+    count = kept;
+    for (let j = 0; j < count; j++) {
+      const o = active[j]!;
+      const gap = Math.abs(o - e);
+      if (gap <= 1 || (closed && gap === edgeCount - 1)) continue;
+      if (maxY[o]! < minY[e]! || maxY[e]! < minY[o]!) continue;
+      const oa = at(o);
+      const ob = at(o + 1 === n ? 0 : o + 1);
+      const ea = at(e);
+      const eb = at(e + 1 === n ? 0 : e + 1);
+      if (segmentsIntersect(oa, ob, ea, eb) || segmentsIntersect(ea, eb, oa, ob)) return true;
+    }
+    active[count++] = e;
+  }
+  return false;
 }
 
 /** True when the contour is closed and neither crosses nor touches itself. */

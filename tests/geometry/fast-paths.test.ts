@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourNearest, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, parsePattern, pathFromSvg, pathToSvg, performOp, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, parsePattern, pathFromSvg, pathToSvg, performOp, smoothThrough } from '../../geometry/index.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
@@ -202,5 +202,39 @@ describe('applyOps (path text printed once, at the end)', () => {
   it('refuses text that looks like its own placeholder as unreadable path data, as before', () => {
     const bad = { ...base, pieces: base.pieces.map((p, i) => (i === 0 ? { ...p, lines: p.lines.map((l) => (l.role === 'grain' ? { ...l, d: '\u0000path:1:0' } : l)) } : p)) };
     expect(() => applyOps(bad, [{ op: 'shrinkage', lengthwise: 3, crosswise: 2 }])).toThrow(/path data/);
+  });
+});
+
+describe('contourSelfCrossings (lean sweep first)', () => {
+  it('finds a crossing exactly when some two non-neighbouring edges meet (all pairs, by hand)', () => {
+    const grid = fc.record({ x: fc.integer({ min: 0, max: 12 }), y: fc.integer({ min: 0, max: 12 }) });
+    fc.assert(
+      fc.property(fc.array(grid, { minLength: 3, maxLength: 14 }), fc.boolean(), (points, closed) => {
+        const contour = contourFromPoints(points, closed);
+        // the polyline as contourSelfCrossings sees it: lines only, so its vertices are the points
+        const v = contour.segments.map((s) => s.from);
+        if (!contour.closed && contour.segments.length > 0) v.push(contour.segments[contour.segments.length - 1]!.to);
+        const edgeCount = contour.closed ? v.length : v.length - 1;
+        const meet = (a: Point, b: Point, c: Point, d: Point): boolean => {
+          const cross = (p: Point, q: Point, r: Point): number => (q.x - p.x) * (r.y - p.y) - (q.y - p.y) * (r.x - p.x);
+          const on = (p: Point, q: Point, r: Point): boolean => Math.min(p.x, q.x) <= r.x && r.x <= Math.max(p.x, q.x) && Math.min(p.y, q.y) <= r.y && r.y <= Math.max(p.y, q.y);
+          const d1 = cross(c, d, a);
+          const d2 = cross(c, d, b);
+          const d3 = cross(a, b, c);
+          const d4 = cross(a, b, d);
+          if (((d1 > 0 && d2 < 0) || (d1 < 0 && d2 > 0)) && ((d3 > 0 && d4 < 0) || (d3 < 0 && d4 > 0))) return true;
+          return (d1 === 0 && on(c, d, a)) || (d2 === 0 && on(c, d, b)) || (d3 === 0 && on(a, b, c)) || (d4 === 0 && on(a, b, d));
+        };
+        let expected = false;
+        if (edgeCount >= 3)
+          for (let i = 0; i < edgeCount && !expected; i++)
+            for (let j = i + 2; j < edgeCount && !expected; j++) {
+              if (contour.closed && j - i === edgeCount - 1) continue;
+              expected = meet(v[i]!, v[(i + 1) % v.length]!, v[j]!, v[(j + 1) % v.length]!);
+            }
+        expect(contourSelfCrossings(contour).length > 0).toBe(expected);
+      }),
+      { numRuns: 2000 },
+    );
   });
 });
