@@ -157,10 +157,15 @@ export function pieceMarks(piece: PrintPiece, transform: Affine, polygon: readon
     }
     const style = l.role === 'lengthen' ? STYLE.lengthen : l.role === 'level' ? STYLE.level : l.role === 'fold' ? STYLE.fold : STYLE.internal;
     inner.push({ kind: 'path', role: l.role, d, stroke: style });
-    if (l.role === 'lengthen') {
-      // the trade draws lengthen/shorten lines doubled: a second line 3 mm below
-      const below = pathToSvg(pathTransform(placed, { a: 1, b: 0, c: 0, d: 1, e: 0, f: 3 }), 3);
-      inner.push({ kind: 'path', role: 'lengthen', d: below, stroke: STYLE.lengthen });
+    const ends: [Point, Point] | undefined = pts.length > 1 ? [pts[0]!, pts[pts.length - 1]!] : undefined;
+    if (l.role === 'lengthen' && ends) {
+      // the trade draws lengthen/shorten lines doubled: a second line 3 mm beside the first
+      // (below it when the piece is upright)
+      const u = vecNormalize({ x: ends[1].x - ends[0].x, y: ends[1].y - ends[0].y });
+      let nrm = { x: -u.y, y: u.x };
+      if (nrm.y < 0 || (nrm.y === 0 && nrm.x < 0)) nrm = { x: -nrm.x, y: -nrm.y };
+      const beside = pathToSvg(pathTransform(placed, { a: 1, b: 0, c: 0, d: 1, e: 3 * nrm.x, f: 3 * nrm.y }), 3);
+      inner.push({ kind: 'path', role: 'lengthen', d: beside, stroke: STYLE.lengthen });
     }
     if (run) {
       const at = { x: run.from.x + 3, y: run.from.y - 1.2 };
