@@ -8,6 +8,8 @@ import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { applyOps, contourLength, demoPattern, outlineContour, parsePattern } from '../../geometry/index.ts';
 import { readPdf } from '../print/pdf-reader.ts';
+import { PassThrough } from 'node:stream';
+import { exportCommand } from '../../server/cli/commands/export.ts';
 import { BLEND } from '../bench/alterations.ts';
 import { writeD6673 } from '../geometry/d6673-writer.ts';
 import { projectRoot } from '../../server/config.ts';
@@ -145,6 +147,14 @@ describe('npx blockwright export', () => {
     const read = await readPdf(fs.readFileSync(out));
     expect(read.numPages).toBe(pages);
     for (const page of read.pages) expect([Math.round(Math.min(page.view[2]!, page.view[3]!) * 1000) / 1000, Math.round(Math.max(page.view[2]!, page.view[3]!) * 1000) / 1000]).toEqual([595.276, 841.89]);
+  });
+
+  it('when standard output is a terminal and no --out is given, then a PDF is refused (binary), before any work', async () => {
+    const file = write('blended-tty.json', blended);
+    const stdout = Object.assign(new PassThrough(), { isTTY: true });
+    const stderr = new PassThrough();
+    await expect(exportCommand.run([file, '--format', 'pdf'], { stdout, stderr })).rejects.toThrow(/give --out FILE/);
+    expect(stdout.read()).toBeNull();
   });
 
   it('when standard output is not a terminal, then the PDF (or SVG) goes there', () => {
