@@ -1,8 +1,9 @@
 /**
  * Reading our PDFs back with pdfjs-dist (Mozilla's PDF reader, a general-purpose reference
- * implementation of ISO 32000): page boxes, and every painted path in PDF user space (points,
+ * implementation of ISO 32000): page boxes, every painted path in PDF user space (points,
  * y up) with its line width, colours and paint operator, found by replaying the operator list's
- * save/restore/transform (and form XObject) state.
+ * save/restore/transform (and form XObject) state, and the page's text as pdfjs extracts it
+ * (getTextContent) with the fonts it is set in.
  */
 import { OPS, getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 
@@ -40,10 +41,39 @@ export interface PaintedPath {
   corners: Pt[];
 }
 
+/** A font a page sets text in (a Tf operator), as pdfjs loaded it. */
+export interface ReadFont {
+  /** The font's name in the file (BaseFont, with a subset tag "ABCDEF+" when subset). */
+  name: string;
+  /** Whether the file carries the font program (pdfjs: not missingFile). */
+  embedded: boolean;
+}
+
+/** One run of text as pdfjs extracts it. */
+export interface ReadText {
+  str: string;
+  /** Start of the baseline in user space (points, y up). */
+  x: number;
+  y: number;
+  /** Advance width of the run and its font size, in user space (points), from the embedded font's metrics. */
+  width: number;
+  size: number;
+  font: ReadFont;
+}
+
 export interface ReadPage {
   view: number[];
   userUnit: number;
   paths: PaintedPath[];
+  /** Fonts selected on the page (each once). */
+  fonts: ReadFont[];
+  /** Text runs with any text in them. */
+  text: ReadText[];
+}
+
+interface PdfjsFont {
+  name?: string;
+  missingFile?: boolean;
 }
 
 const STROKES = new Set<number>([OPS.stroke, OPS.closeStroke, OPS.fillStroke, OPS.eoFillStroke, OPS.closeFillStroke, OPS.closeEOFillStroke]);
@@ -61,9 +91,13 @@ export async function readPdf(data: Buffer): Promise<{ numPages: number; viewerP
     let clipNext = false;
     const stack: { ctm: Matrix; lw: number; stroke: string; fill: string }[] = [];
     const paths: PaintedPath[] = [];
+    const fontIds = new Set<string>();
     ol.fnArray.forEach((fn, k) => {
       const args = ol.argsArray[k] as unknown[];
       switch (fn) {
+        case OPS.setFont:
+          fontIds.add(String(args[0]));
+          break;
         case OPS.save:
           stack.push({ ctm, lw, stroke, fill });
           break;
@@ -143,7 +177,18 @@ export async function readPdf(data: Buffer): Promise<{ numPages: number; viewerP
         }
       }
     });
-    pages.push({ view: [...page.view], userUnit: page.userUnit, paths });
+    // fonts are in the document's common objects once the operator list has been built
+    const font = (id: string): ReadFont => {
+      const f = page.commonObjs.get(id) as PdfjsFont;
+      return { name: f.name ?? '', embedded: f.missingFile === false };
+    };
+    const content = await page.getTextContent();
+    const text: ReadText[] = content.items.flatMap((item) => {
+      if (!('str' in item) || !item.str) return [];
+      const t = item.transform as Matrix;
+      return [{ str: item.str, x: t[4], y: t[5], width: item.width, size: Math.hypot(t[0], t[1]), font: font(item.fontName) }];
+    });
+    pages.push({ view: [...page.view], userUnit: page.userUnit, paths, fonts: [...fontIds].map(font), text });
   }
   const viewerPreferences = (await pdf.getViewerPreferences()) as Record<string, unknown> | null;
   await pdf.destroy();

@@ -1,12 +1,13 @@
 /**
  * The print PDF read back with pdfjs-dist (Mozilla's PDF reader, used as the reference reader):
  * page sizes against ISO 216 / US paper in ISO 32000-1 user space (72 pt per inch), the test
- * squares' measured size, true size on a large-format sheet, and that the tile pages together
- * carry every point of every cut line inside their printable areas.
+ * squares' measured size, true size on a large-format sheet, that the tile pages together
+ * carry every point of every cut line inside their printable areas, and that the words are real
+ * text in embedded Figtree (pdfjs getTextContent) standing where the scene puts them.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { applyOps, contourBounds, contourFlatten, demoPattern, parsePattern, pathFromSvg, type Pattern } from '../../geometry/index.ts';
-import { PT_PER_MM, type PrintPlan, STYLE, planPrint } from '../../geometry/print/index.ts';
+import { PT_PER_MM, type PrintPlan, SCALE_INSTRUCTION, STYLE, planPrint } from '../../geometry/print/index.ts';
 import { renderPdf } from '../../server/modules/print/pdf.ts';
 import { BLEND } from '../bench/alterations.ts';
 import { expectNear } from '../geometry/helpers.ts';
@@ -144,6 +145,81 @@ describe('home-printer PDF (read back with pdfjs-dist)', () => {
       }
       expect(checked).toBeGreaterThan(500);
     }
+  });
+});
+
+describe('text in the PDF is real text (read back with pdfjs-dist getTextContent)', () => {
+  const strings = (page: ReadPage) => page.text.map((t) => t.str);
+
+  it('page 1 carries the test-square labels "1 in" and "5 cm", their captions, the title and the instruction to print at 100 % as extractable text', () => {
+    for (const doc of [letter, a4]) {
+      const s = strings(doc.read.pages[0]!);
+      expect(s).toEqual(expect.arrayContaining(['1 in', '5 cm', '1 in × 1 in', '5 cm × 5 cm', WORDS.title, SCALE_INSTRUCTION]));
+      expect(s.some((t) => t.includes('Print at 100 %'))).toBe(true);
+    }
+  });
+
+  it('all text is set in embedded, subset Figtree Regular and Bold and nothing else; bold labels in the bold font', () => {
+    // a subset font's name is six capital letters and "+" before the font's own name (ISO 32000-1
+    // §9.6.4, from memory); pdfjs reports a font whose program the file lacks as missingFile
+    const subsetFigtree = /^[A-Z]{6}\+Figtree-(Regular|Bold)$/;
+    for (const doc of [letter, a4]) {
+      const names = new Set<string>();
+      for (const page of doc.read.pages) {
+        expect(page.fonts.length).toBeGreaterThan(0);
+        for (const f of [...page.fonts, ...page.text.map((t) => t.font)]) {
+          expect(f.name).toMatch(subsetFigtree);
+          expect(f.embedded, f.name).toBe(true);
+          names.add(f.name.slice(7));
+        }
+      }
+      expect([...names].sort()).toEqual(['Figtree-Bold', 'Figtree-Regular']);
+      const run = (str: string) => doc.read.pages[0]!.text.find((t) => t.str === str)!;
+      for (const bold of ['1 in', '5 cm', WORDS.title, SCALE_INSTRUCTION]) expect(run(bold).font.name, bold).toMatch(/\+Figtree-Bold$/);
+      for (const regular of ['1 in × 1 in', '5 cm × 5 cm']) expect(run(regular).font.name, regular).toMatch(/\+Figtree-Regular$/);
+    }
+  });
+
+  it('the square labels stand where the scene puts them: centred on their squares (within 0.3 pt, by pdfjs’s own widths), baselines 14.2 and 27 mm below the squares’ top, 4 and 5 mm tall', () => {
+    for (const doc of [letter, a4]) {
+      const page = doc.read.pages[0]!;
+      const [inch, cm] = testSquares(page)
+        .map((sq) => bounds(sq.corners))
+        .sort((p, q) => p.maxX - p.minX - (q.maxX - q.minX)) as [ReturnType<typeof bounds>, ReturnType<typeof bounds>];
+      const label = (str: string) => page.text.find((t) => t.str === str)!;
+      // scene.ts testSquares: "1 in" (4 mm) at the 1 in square's middle, baseline 12.7 + 1.5 mm
+      // below its top; "5 cm" (5 mm) at the 5 cm square's middle, baseline 27 mm below its top
+      for (const [sq, str, below, size] of [
+        [inch, '1 in', 25.4 / 2 + 1.5, 4],
+        [cm, '5 cm', 27, 5],
+      ] as const) {
+        const t = label(str);
+        expectNear(t.x + t.width / 2, (sq.minX + sq.maxX) / 2, 0.3, `${str} centre`);
+        expectNear(t.y, sq.maxY - below * PT_PER_MM, 0.1, `${str} baseline`);
+        expectNear(t.size, size * PT_PER_MM, 1e-3, `${str} size`);
+      }
+    }
+  });
+
+  it('each tile page names itself and its page number in text; the caption to the right-hand neighbour ends 12 mm inside the frame (end anchor)', () => {
+    const plan = letter.plan;
+    if (plan.format !== 'tiled') throw new Error('expected tiles');
+    const m = plan.grid.margin;
+    let rightCaptions = 0;
+    plan.used.forEach((tile, i) => {
+      const page = letter.read.pages[i + 1]!;
+      const s = strings(page);
+      expect(s).toContain(tile.label);
+      expect(s).toContain(`page ${i + 2} of ${plan.pageCount} · ${WORDS.title}`);
+      const right = plan.used.find((t) => t.row === tile.row && t.col === tile.col + 1);
+      if (!right) return;
+      const caption = page.text.find((t) => t.str === `joins ${right.label}`);
+      expect(caption, `${tile.label} → ${right.label}`).toBeDefined();
+      // scene.ts tileScene: anchored at its end, m + width − overlap − 12 mm from the sheet's left
+      expectNear(caption!.x + caption!.width, (m + tile.area.width - plan.grid.overlap - 12) * PT_PER_MM, 0.3, `${tile.label} caption end`);
+      rightCaptions++;
+    });
+    expect(rightCaptions).toBeGreaterThan(5);
   });
 });
 

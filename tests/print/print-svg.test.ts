@@ -36,6 +36,21 @@ describe('true-scale SVG', () => {
     expect(svg.match(/data-role="cut"/g)).toHaveLength(plan.pieces.length);
   });
 
+  it('carries its text as filled Figtree outlines of the static weights, needing no font: bold labels in bold glyphs, the words kept in data-text', () => {
+    expect(svg).not.toMatch(/<text|@font-face|font-family/);
+    const group = (text: string) => new RegExp(`<g data-text="${text}" fill="#[0-9a-f]{6}">((?:<use [^>]*/>)+)</g>`).exec(svg)?.[1] ?? '';
+    const glyphs = (text: string) => [...group(text).matchAll(/href="#([rb]\d+)"/g)].map((m) => m[1]!);
+    // "1 in" has three glyphs with ink (the space has none)
+    expect(glyphs('1 in')).toHaveLength(3);
+    expect(glyphs('1 in').every((k) => k.startsWith('b'))).toBe(true);
+    expect(glyphs('1 in × 1 in').every((k) => k.startsWith('r'))).toBe(true);
+    expect(glyphs('1 in × 1 in')).toHaveLength(7);
+    // each glyph used is defined once, as a filled path
+    const used = new Set([...svg.matchAll(/href="#([rb]\d+)"/g)].map((m) => m[1]!));
+    for (const k of used) expect(svg.match(new RegExp(`<path id="${k}" d="M`, 'g')), k).toHaveLength(1);
+    expect(svg).not.toMatch(/<g data-text="[^"]*"[^>]*stroke/);
+  });
+
   it('rendered at 96 dpi (resvg), the sheet has the expected pixel size and the 1 in square spans 96 px, the 5 cm one 188.98 px', () => {
     const widthMm = Number(/width="([\d.]+)mm"/.exec(svg)![1]);
     const heightMm = Number(/height="([\d.]+)mm"/.exec(svg)![1]);

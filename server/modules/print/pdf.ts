@@ -3,8 +3,9 @@
  * UserUnit 1, ISO 32000-1 user space), drawn in millimetres through one scale per page, and
  * ViewerPreferences /PrintScaling /None. Tiled paper: page 1 = test squares + assembly map, then
  * one page per tile in use (only the pieces that reach a tile are written on its page). Large
- * format: one sheet with everything. Text is Figtree glyph outlines, each glyph written once as a
- * form XObject and placed where it is used (see fonts.ts for why not an embedded font).
+ * format: one sheet with everything. Text is real text in Figtree, regular and bold, embedded as
+ * subset fonts (fonts.ts), so it can be selected and searched; middle and end anchors are placed
+ * with the embedded font's own widths.
  */
 import PDFDocument from 'pdfkit';
 import {
@@ -20,39 +21,18 @@ import {
   sheetScene,
   tileScene,
 } from '../../../geometry/print/index.ts';
-import { glyphBounds, glyphPdfPath, layoutText } from './fonts.ts';
+import { figtree, printableText } from './fonts.ts';
 
-/** pdfkit internals used here: raw content, page resources, the catalog. */
+/** pdfkit internals used here: the catalog. */
 interface PdfInternals {
-  addContent(data: string): unknown;
-  page: { xobjects: Record<string, unknown> };
   _root: { data: Record<string, unknown> };
 }
 
-const f = (v: number): string => String(Math.round(v * 10000) / 10000);
+/** Names the two Figtree weights are registered under in each document. */
+const FONT = { regular: 'Figtree', bold: 'Figtree-Bold' } as const;
 
 class Writer {
-  private readonly glyphs = new Map<number, { name: string; ref: unknown }>();
-  private readonly raw: PdfInternals;
-
-  constructor(readonly doc: PDFKit.PDFDocument) {
-    this.raw = doc as unknown as PdfInternals;
-  }
-
-  private glyph(id: number): string {
-    let g = this.glyphs.get(id);
-    if (!g) {
-      const [x0, y0, x1, y1] = glyphBounds(id);
-      const pad = 60;
-      const ref = this.doc.ref({ Type: 'XObject', Subtype: 'Form', BBox: [x0 - pad, y0 - pad, x1 + pad, y1 + pad], Resources: {} }) as unknown as { end(data: string): void };
-      // fill and stroke (nonzero): the stroke width and colours come from the page's state
-      ref.end(`${glyphPdfPath(id)}\nB`);
-      g = { name: `Gl${id}`, ref };
-      this.glyphs.set(id, g);
-    }
-    this.raw.page.xobjects[g.name] = g.ref;
-    return g.name;
-  }
+  constructor(readonly doc: PDFKit.PDFDocument) {}
 
   marks(marks: readonly Mark[]): void {
     const doc = this.doc;
@@ -82,12 +62,14 @@ class Writer {
           doc.restore();
           break;
         case 'text': {
-          const run = layoutText(m.text, m.at.x, m.at.y, m.size, m.bold, m.anchor);
-          if (run.glyphs.length === 0) break;
-          doc.fillColor(m.colour).strokeColor(m.colour).lineJoin('round').undash();
-          const k = f(run.scale);
-          const parts = run.glyphs.map((g) => `q ${k} 0 0 -${k} ${f(g.x)} ${f(g.y)} cm ${f(run.strokeUnits)} w /${this.glyph(g.id)} Do Q`);
-          this.raw.addContent(parts.join('\n'));
+          const t = printableText(m.text);
+          if (!t.trim()) break;
+          // the size is the em in mm (the page is drawn in mm); the width comes from the same
+          // embedded font, kerning included, so middle and end anchors land where the scene says
+          doc.font(m.bold ? FONT.bold : FONT.regular).fontSize(m.size);
+          const width = doc.widthOfString(t);
+          const x = m.anchor === 'middle' ? m.at.x - width / 2 : m.anchor === 'end' ? m.at.x - width : m.at.x;
+          doc.fillColor(m.colour).text(t, x, m.at.y, { lineBreak: false, baseline: 'alphabetic' });
           break;
         }
       }
@@ -128,6 +110,9 @@ export async function renderPdf(plan: PrintPlan, words: SceneText): Promise<Buff
     pdfVersion: '1.7',
     info: { Title: words.title, Creator: 'Blockwright', Producer: 'Blockwright (pdfkit)' },
   });
+  // each embedded once at the end, subset to the glyphs the pages used
+  doc.registerFont(FONT.regular, figtree('regular'));
+  doc.registerFont(FONT.bold, figtree('bold'));
   // ViewerPreferences /PrintScaling /None (ISO 32000-1 Table 150): the print dialog starts at no scaling.
   (doc as unknown as PdfInternals)._root.data.ViewerPreferences = doc.ref({ PrintScaling: 'None' });
   const chunks: Buffer[] = [];

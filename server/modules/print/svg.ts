@@ -1,8 +1,15 @@
 /**
  * True-scale SVG of the print on one sheet: `width`/`height` in mm and a viewBox in mm, so one
  * user unit is one millimetre whatever px-per-inch a program assumes (trade reference §5.3).
- * The same drawing data as the PDF's single sheet; text as Figtree outlines (<use> of one
- * <path> per glyph), so nothing depends on installed fonts.
+ * The same drawing data as the PDF's single sheet.
+ *
+ * Text is drawn as Figtree glyph outlines (<use> of one filled <path> per glyph and weight) taken
+ * from the same static 400/700 font files the PDF embeds, with the words kept in each group's
+ * data-text. Outlines rather than <text> with an embedded @font-face (base64 WOFF): not every
+ * program an SVG is opened or printed from reads @font-face inside an SVG (resvg, which the tests
+ * render with, draws no text at all from one), and a program that falls back to an installed font
+ * gets other widths, so centred labels shift; outlines draw the same in every renderer and need
+ * no font where the file is printed.
  */
 import { type Mark, type PrintPlan, type SceneText, contentMarks, sheetScene } from '../../../geometry/print/index.ts';
 import { glyphSvgPath, layoutText } from './fonts.ts';
@@ -12,7 +19,7 @@ const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;'
 
 export function renderSvg(plan: PrintPlan, words: SceneText): string {
   const scene = sheetScene(plan, words);
-  const glyphs = new Set<number>();
+  const glyphs = new Set<string>();
   let clipId = 0;
   const defs: string[] = [];
 
@@ -37,10 +44,10 @@ export function renderSvg(plan: PrintPlan, words: SceneText): string {
           if (!run.glyphs.length) return [];
           const k = f(run.scale);
           const uses = run.glyphs.map((g) => {
-            glyphs.add(g.id);
-            return `<use href="#g${g.id}" transform="matrix(${k} 0 0 -${k} ${f(g.x)} ${f(g.y)})"/>`;
+            glyphs.add(g.key);
+            return `<use href="#${g.key}" transform="matrix(${k} 0 0 -${k} ${f(g.x)} ${f(g.y)})"/>`;
           });
-          return [`<g data-text="${esc(m.text)}" fill="${m.colour}" stroke="${m.colour}" stroke-width="${f(run.strokeUnits)}" stroke-linejoin="round">${uses.join('')}</g>`];
+          return [`<g data-text="${esc(m.text)}" fill="${m.colour}">${uses.join('')}</g>`];
         }
       }
     });
@@ -53,7 +60,7 @@ export function renderSvg(plan: PrintPlan, words: SceneText): string {
     ...contentMarks(plan, words).flatMap((g) => draw(g.marks)),
     '</g>',
   ];
-  for (const id of glyphs) defs.push(`<path id="g${id}" d="${glyphSvgPath(id)}"/>`);
+  for (const key of glyphs) defs.push(`<path id="${key}" d="${glyphSvgPath(key)}"/>`);
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<svg xmlns="http://www.w3.org/2000/svg" width="${f(scene.width)}mm" height="${f(scene.height)}mm" viewBox="0 0 ${f(scene.width)} ${f(scene.height)}">`,
