@@ -20,3 +20,12 @@ export * from './ops/slash-spread.ts';
 export * from './xml.ts';
 export * from './svg-import.ts';
 export * from './dxf-import.ts';
+// Print geometry: paper, tiles, layout, empty pages, page drawing data (geometry/print/README.md).
+export * from './print/errors.ts';
+export * from './print/paper.ts';
+export * from './print/grid.ts';
+export * from './print/pieces.ts';
+export * from './print/layout.ts';
+export * from './print/empty.ts';
+export * from './print/plan.ts';
+export * from './print/scene.ts';

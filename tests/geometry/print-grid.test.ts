@@ -3,7 +3,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { PAPERS, PAPER_IDS, PT_PER_MM, PX_PER_MM, PrintError, paperSheet, rowLetters, tileCount, tileGrid, tileLabel } from '../../geometry/print/index.ts';
+import { PAPERS, PAPER_IDS, PT_PER_MM, PX_PER_MM, PrintError, paperSheet, rowLetters, tileCount, tileGrid, tileLabel } from '../../geometry/index.ts';
 import { expectNear } from './helpers.ts';
 
 describe('paper sizes', () => {

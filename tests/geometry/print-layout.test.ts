@@ -16,7 +16,7 @@ import {
   segmentMeetsRect,
   shelfLayout,
   type TiledPlan,
-} from '../../geometry/print/index.ts';
+} from '../../geometry/index.ts';
 import { BLEND } from '../bench/alterations.ts';
 import { expectNear } from './helpers.ts';
 

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { applyOps, demoPattern } from '../../geometry/index.ts';
-import { type Mark, SCALE_INSTRUCTION, type TiledPlan, coverScene, planPrint, tileScene } from '../../geometry/print/index.ts';
+import { type Mark, SCALE_INSTRUCTION, type TiledPlan, coverScene, planPrint, tileScene } from '../../geometry/index.ts';
 import { BLEND } from '../bench/alterations.ts';
 import { expectNear } from './helpers.ts';
 

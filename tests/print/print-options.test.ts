@@ -3,7 +3,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { applyOps, demoPattern } from '../../geometry/index.ts';
-import { PrintError } from '../../geometry/print/index.ts';
+import { PrintError } from '../../geometry/index.ts';
 import { PrintOptionsError, parsePrintOptions, printPattern } from '../../server/modules/print/print.service.ts';
 import { BLEND } from '../bench/alterations.ts';
 

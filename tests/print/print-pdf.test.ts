@@ -7,7 +7,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { applyOps, contourBounds, contourFlatten, demoPattern, parsePattern, pathFromSvg, type Pattern } from '../../geometry/index.ts';
-import { PT_PER_MM, type PrintPlan, SCALE_INSTRUCTION, STYLE, planPrint } from '../../geometry/print/index.ts';
+import { PT_PER_MM, type PrintPlan, SCALE_INSTRUCTION, STYLE, planPrint } from '../../geometry/index.ts';
 import { renderPdf } from '../../server/modules/print/pdf.ts';
 import { BLEND } from '../bench/alterations.ts';
 import { expectNear } from '../geometry/helpers.ts';

@@ -10,7 +10,7 @@ import path from 'node:path';
 import { Resvg } from '@resvg/resvg-js';
 import { describe, expect, it } from 'vitest';
 import { applyOps, demoPattern } from '../../geometry/index.ts';
-import { STYLE, planPrint } from '../../geometry/print/index.ts';
+import { STYLE, planPrint } from '../../geometry/index.ts';
 import { projectRoot } from '../../server/config.ts';
 import { renderPdf } from '../../server/modules/print/pdf.ts';
 import { renderSvg } from '../../server/modules/print/svg.ts';

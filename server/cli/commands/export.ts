@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { parsePattern } from '../../../geometry/index.ts';
-import { PAPER_IDS } from '../../../geometry/print/index.ts';
+import { PAPER_IDS } from '../../../geometry/index.ts';
 import { printPattern } from '../../modules/print/print.service.ts';
 import { CliError, parseOptions, readJson } from '../io.ts';
 import type { Command } from '../command.ts';

@@ -20,7 +20,7 @@ import {
   rectsMeet,
   sheetScene,
   tileScene,
-} from '../../../geometry/print/index.ts';
+} from '../../../geometry/index.ts';
 import { figtree, printableText } from './fonts.ts';
 
 /** pdfkit internals used here: the catalog. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DEFAULT_MARGIN, PAPER_IDS } from '../../../geometry/print/index.ts';
+import { DEFAULT_MARGIN, PAPER_IDS } from '../../../geometry/index.ts';
 
 /** Print options as a request or the command line gives them (lengths in mm). */
 export const printOptionsSchema = z

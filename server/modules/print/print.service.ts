@@ -4,7 +4,7 @@
  * throws PrintError (geometry/print) saying what to change. Callers report them.
  */
 import type { Pattern } from '../../../geometry/index.ts';
-import { type PrintPlan, planPrint } from '../../../geometry/print/index.ts';
+import { type PrintPlan, planPrint } from '../../../geometry/index.ts';
 import { renderPdf } from './pdf.ts';
 import { type PrintRequestInput, printOptionsSchema } from './print.schemas.ts';
 import { renderSvg } from './svg.ts';

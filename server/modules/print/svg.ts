@@ -11,7 +11,7 @@
  * gets other widths, so centred labels shift; outlines draw the same in every renderer and need
  * no font where the file is printed.
  */
-import { type Mark, type PrintPlan, type SceneText, contentMarks, sheetScene } from '../../../geometry/print/index.ts';
+import { type Mark, type PrintPlan, type SceneText, contentMarks, sheetScene } from '../../../geometry/index.ts';
 import { glyphSvgPath, layoutText } from './fonts.ts';
 
 const f = (v: number): string => String(Math.round(v * 1000) / 1000);
