@@ -49,7 +49,7 @@ export const CAUTION_INK = '#b3432a';
 export const GREY_FILL = '#dedad5';
 
 /** The instruction printed beside the test squares (one line). */
-export const SCALE_INSTRUCTION = 'Print at 100 % (actual size, no "fit to page"), then measure both squares before cutting: a wrong scale ruins fabric.';
+export const SCALE_INSTRUCTION = 'Print at 100 % (actual size), then measure both squares before cutting: a wrong scale ruins fabric.';
 
 export interface SceneText {
   readonly title: string;
