@@ -375,9 +375,13 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       changed = true;
     }
   }
-  if (innerHalfLeaves(n, px, py, dx, dy, len, wd)) return undefined;
   const out: Point[] = [];
   for (let i = 0; i < n; i++) if (prev[i] !== -1) out.push({ x: jx[i]!, y: jy[i]! });
+  const runEnds = (i: number) => ({
+    first: !closedRun && run[i === 0 ? n - 1 : i - 1] !== run[i],
+    last: !closedRun && run[i + 1 === n ? 0 : i + 1] !== run[i],
+  });
+  if (!innerHalvesInside(out, n, px, py, dx, dy, len, wd, runEnds)) return undefined;
   // `out[i]` joins chord i to chord i + 1; the polygon runs through them in order
   const cut = contourFromPoints(out, true);
   if (!contourIsSimple(cut) || contourSignedArea(cut) <= 0) return undefined;
@@ -385,56 +389,92 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
 }
 
 /**
- * True when the inner edge of some chord's band (the chord moved inward by its width: clipper
- * draws each band on both sides of its stretch) meets a seam chord that is not its neighbour,
- * so that the inner half might reach out of the piece (a piece thinner than an allowance).
- * A sweep over x on typed arrays; touching counts as meeting.
+ * True when every chord's inner half-band (clipper draws each band on both sides of its
+ * stretch; the 0.05 mm end overlap at the ends of a run included) lies inside the polygon
+ * `cut`. Each half-band is a rectangle standing on its seam chord, and the seam chord lies on
+ * the inner side of its own offset, an edge of `cut`; so the rectangle lies inside when none of
+ * its four sides meets an edge of the polygon (touching counts as meeting, so a chord next to a
+ * run of width 0, whose seam is part of the cut line, is left to the union). A sweep over x on
+ * typed arrays.
  */
-function innerHalfLeaves(n: number, px: Float64Array, py: Float64Array, dx: Float64Array, dy: Float64Array, len: Float64Array, wd: Float64Array): boolean {
-  // segment s < n: seam chord s; s ≥ n: inner edge of chord s − n
-  const m = 2 * n;
+function innerHalvesInside(
+  cut: readonly Point[],
+  n: number,
+  px: Float64Array,
+  py: Float64Array,
+  dx: Float64Array,
+  dy: Float64Array,
+  len: Float64Array,
+  wd: Float64Array,
+  runEnds: (i: number) => { first: boolean; last: boolean },
+): boolean {
+  const c = cut.length;
+  const m = 4 * n + c;
   const ax = new Float64Array(m);
   const ay = new Float64Array(m);
   const bx = new Float64Array(m);
   const by = new Float64Array(m);
-  const minX = new Float64Array(m);
-  const maxX = new Float64Array(m);
-  const order: number[] = [];
-  for (let s = 0; s < m; s++) {
-    const i = s < n ? s : s - n;
-    const w = s < n ? 0 : wd[i]!;
-    if (s >= n && !(w > 0)) continue;
-    ax[s] = px[i]! - w * dy[i]!;
-    ay[s] = py[i]! + w * dx[i]!;
-    bx[s] = ax[s]! + len[i]! * dx[i]!;
-    by[s] = ay[s]! + len[i]! * dy[i]!;
+  let count = 0;
+  const add = (x0: number, y0: number, x1: number, y1: number): void => {
+    ax[count] = x0;
+    ay[count] = y0;
+    bx[count] = x1;
+    by[count] = y1;
+    count++;
+  };
+  for (let k = 0; k < c; k++) {
+    const p = cut[k]!;
+    const q = cut[k + 1 === c ? 0 : k + 1]!;
+    add(p.x, p.y, q.x, q.y);
+  }
+  const probesFrom = count;
+  for (let i = 0; i < n; i++) {
+    const w = wd[i]!;
+    if (!(w > 0)) continue;
+    const ends = runEnds(i);
+    const s0 = ends.first ? -END_OVERLAP : 0;
+    const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
+    // inward normal: perp of the direction
+    const inx = -dy[i]! * w;
+    const iny = dx[i]! * w;
+    const x0 = px[i]! + s0 * dx[i]!;
+    const y0 = py[i]! + s0 * dy[i]!;
+    const x1 = px[i]! + s1 * dx[i]!;
+    const y1 = py[i]! + s1 * dy[i]!;
+    add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
+    add(x0 + inx, y0 + iny, x1 + inx, y1 + iny);
+    add(x0, y0, x0 + inx, y0 + iny);
+    add(x1, y1, x1 + inx, y1 + iny);
+  }
+  const minX = new Float64Array(count);
+  const maxX = new Float64Array(count);
+  const order = new Int32Array(count);
+  for (let s = 0; s < count; s++) {
     minX[s] = Math.min(ax[s]!, bx[s]!);
     maxX[s] = Math.max(ax[s]!, bx[s]!);
-    order.push(s);
+    order[s] = s;
   }
   order.sort((p, q) => minX[p]! - minX[q]!);
   const orient = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number): number => (x1 - x0) * (y2 - y0) - (y1 - y0) * (x2 - x0);
-  const active: number[] = [];
+  const active = new Int32Array(count);
+  let live = 0;
   for (const e of order) {
     let kept = 0;
-    for (let k = 0; k < active.length; k++) if (!(maxX[active[k]!]! < minX[e]!)) active[kept++] = active[k]!;
-    active.length = kept;
-    for (const o of active) {
-      if (o < n === e < n) continue; // a seam chord against an inner edge only
-      const seam = o < n ? o : e;
-      const inner = (o < n ? e : o) - n;
-      const gap = Math.abs(seam - inner);
-      if (gap <= 1 || gap === n - 1) continue;
+    for (let k = 0; k < live; k++) if (!(maxX[active[k]!]! < minX[e]!)) active[kept++] = active[k]!;
+    live = kept;
+    for (let k = 0; k < live; k++) {
+      const o = active[k]!;
+      if (o < probesFrom === e < probesFrom) continue; // a probe against an edge of the cut only
       if (Math.max(ay[o]!, by[o]!) < Math.min(ay[e]!, by[e]!) || Math.max(ay[e]!, by[e]!) < Math.min(ay[o]!, by[o]!)) continue;
       const d1 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, ax[e]!, ay[e]!);
       const d2 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, bx[e]!, by[e]!);
       const d3 = orient(ax[e]!, ay[e]!, bx[e]!, by[e]!, ax[o]!, ay[o]!);
       const d4 = orient(ax[e]!, ay[e]!, bx[e]!, by[e]!, bx[o]!, by[o]!);
-      if (d1 * d2 <= 0 && d3 * d4 <= 0) return true;
+      if (d1 * d2 <= 0 && d3 * d4 <= 0) return false;
     }
-    active.push(e);
+    active[live++] = e;
   }
-  return false;
+  return true;
 }
 
 function outerBoundary(piece: Piece, outline: Outline, shapes: PathD[]): Contour {

@@ -192,4 +192,23 @@ describe('seam allowance — the direct construction against the union (property
     );
     expect(direct).toBeGreaterThan(5);
   });
+
+  it('gives the union’s cut line on strips thinner than their allowance (a band’s inner half reaching past the far side)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 4, max: 60, noNaN: true }),
+        fc.double({ min: -30, max: 30, noNaN: true }),
+        fc.array(fc.constantFrom(0, 5, 15, 15, 40), { minLength: 4, maxLength: 4 }),
+        (h, lean, widths) => {
+          const piece = rect(200, h).pieces[0]!;
+          const o = piece.outlines[0]!;
+          // lean the right-hand side so the corners are not all square
+          const outline = { ...o, d: `M0 0 L200 0 L${200 + lean} ${h} L0 ${h} Z`, points: o.points.map((p) => (p.name === 'br' ? { ...p, x: 200 + lean } : p)) };
+          const op = { op: 'seam-allowance' as const, width: widths[0]!, edges: { waist: widths[1]!, inseam: widths[2]!, hem: widths[3]! } };
+          expect(hausdorff(cutLineOf(piece, outline, op), cutLineByUnion(piece, outline, op))).toBeLessThan(1e-4);
+        },
+      ),
+      { numRuns: 100 },
+    );
+  });
 });
