@@ -456,23 +456,35 @@ function innerHalvesInside(
   }
   order.sort((p, q) => minX[p]! - minX[q]!);
   const orient = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number): number => (x1 - x0) * (y2 - y0) - (y1 - y0) * (x2 - x0);
-  const active = new Int32Array(count);
-  let live = 0;
+  // two active lists (edges of the cut, probes): each segment is tested against the other kind only
+  const activeEdges = new Int32Array(count);
+  const activeProbes = new Int32Array(count);
+  let liveEdges = 0;
+  let liveProbes = 0;
   for (const e of order) {
+    const left = minX[e]!;
+    const probe = e >= probesFrom;
+    const others = probe ? activeEdges : activeProbes;
+    let live = probe ? liveEdges : liveProbes;
     let kept = 0;
-    for (let k = 0; k < live; k++) if (!(maxX[active[k]!]! < minX[e]!)) active[kept++] = active[k]!;
+    for (let k = 0; k < live; k++) if (!(maxX[others[k]!]! < left)) others[kept++] = others[k]!;
     live = kept;
+    if (probe) liveEdges = live;
+    else liveProbes = live;
+    const eMinY = Math.min(ay[e]!, by[e]!);
+    const eMaxY = Math.max(ay[e]!, by[e]!);
     for (let k = 0; k < live; k++) {
-      const o = active[k]!;
-      if (o < probesFrom === e < probesFrom) continue; // a probe against an edge of the cut only
-      if (Math.max(ay[o]!, by[o]!) < Math.min(ay[e]!, by[e]!) || Math.max(ay[e]!, by[e]!) < Math.min(ay[o]!, by[o]!)) continue;
+      const o = others[k]!;
+      if (Math.max(ay[o]!, by[o]!) < eMinY || eMaxY < Math.min(ay[o]!, by[o]!)) continue;
       const d1 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, ax[e]!, ay[e]!);
       const d2 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, bx[e]!, by[e]!);
+      if (d1 * d2 > 0) continue;
       const d3 = orient(ax[e]!, ay[e]!, bx[e]!, by[e]!, ax[o]!, ay[o]!);
       const d4 = orient(ax[e]!, ay[e]!, bx[e]!, by[e]!, bx[o]!, by[o]!);
-      if (d1 * d2 <= 0 && d3 * d4 <= 0) return false;
+      if (d3 * d4 <= 0) return false;
     }
-    active[live++] = e;
+    if (probe) activeProbes[liveProbes++] = e;
+    else activeEdges[liveEdges++] = e;
   }
   return true;
 }
