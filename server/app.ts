@@ -5,6 +5,7 @@ import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import type pg from 'pg';
+import type PgBoss from 'pg-boss';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
@@ -19,6 +20,8 @@ import { PasswordResetService } from './modules/auth/password-reset.service.ts';
 import { healthRouter } from './modules/health/health.router.ts';
 import type { Mailer } from './modules/mail/mailer.ts';
 import { metaRouter } from './modules/meta/meta.router.ts';
+import { printsRouter } from './modules/prints/prints.router.ts';
+import { PrintsService } from './modules/prints/prints.service.ts';
 import { UsersService } from './modules/users/users.service.ts';
 import type { DemoAccount } from './seed/demo.ts';
 
@@ -29,6 +32,8 @@ export interface AppDeps {
   sessionPool: pg.Pool;
   sessionSecret: string;
   mailer: Mailer;
+  /** Background jobs: the app only queues; main.ts (or a test) runs the workers. */
+  jobs: Pick<PgBoss, 'send'>;
   logger: Logger;
   demoAccounts: readonly DemoAccount[] | null;
   /** The built client (vite build output); when missing, only the API is served. */
@@ -65,7 +70,9 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const api = express.Router();
-  api.use(express.json({ limit: '1mb' }));
+  const json = express.json({ limit: '1mb' });
+  // Print requests carry a whole pattern and parse their own, larger bodies.
+  api.use((req, res, next) => (req.path.startsWith('/prints') ? next() : json(req, res, next)));
   api.use(
     session({
       name: 'bw.sid',
@@ -94,6 +101,7 @@ export function createApp(deps: AppDeps): Express {
   );
   api.use('/account', accountRouter({ db: deps.db, users }));
   api.use('/admin', adminRouter({ users, mailer: deps.mailer }));
+  api.use('/prints', printsRouter({ prints: new PrintsService(deps.db, deps.jobs) }));
   api.use(apiNotFound);
   app.use('/api', api);
 

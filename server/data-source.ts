@@ -3,9 +3,11 @@ import { DataSource } from 'typeorm';
 import { UserEntity } from './modules/users/user.entity.ts';
 import { PasswordResetTokenEntity } from './modules/auth/password-reset-token.entity.ts';
 import { Foundation1764633600000 } from './migrations/1764633600000-Foundation.ts';
+import { PrintJobs1764720000000 } from './migrations/1764720000000-PrintJobs.ts';
+import { PrintJobEntity } from './modules/prints/print-job.entity.ts';
 
-export const entities = [UserEntity, PasswordResetTokenEntity];
-export const migrations = [Foundation1764633600000];
+export const entities = [UserEntity, PasswordResetTokenEntity, PrintJobEntity];
+export const migrations = [Foundation1764633600000, PrintJobs1764720000000];
 
 /** The app's DataSource. Schema changes go through migrations only (`synchronize` is off). */
 export function createDataSource(url: string): DataSource {

@@ -14,7 +14,9 @@ import { createApp } from './app.ts';
 import { loadConfig, projectRoot, type Config } from './config.ts';
 import { openDatabase } from './db/database.ts';
 import { startCluster, type Cluster } from './db/postgres.ts';
+import { startJobs } from './jobs/jobs.ts';
 import { createMailer } from './modules/mail/mailer.ts';
+import { PrintsService, startPrintWorker } from './modules/prints/prints.service.ts';
 import { UsersService } from './modules/users/users.service.ts';
 import { DEMO_ACCOUNTS, seedDemo } from './seed/demo.ts';
 
@@ -84,12 +86,17 @@ async function main(): Promise<void> {
     cleanups.push(() => mailer.close());
     if (mailer.outbox) say(`Mail goes to the local outbox (SMTP on 127.0.0.1:${mailer.outbox.port}); admins read it at /admin/outbox.`);
 
+    const boss = await startJobs(databaseUrl);
+    cleanups.push(() => boss.stop({ graceful: true, timeout: 10_000 }));
+    await startPrintWorker(boss, new PrintsService(db, boss));
+
     const app = createApp({
       config,
       db,
       sessionPool,
       sessionSecret: sessionSecretFor(config.dataDir, config.sessionSecret),
       mailer,
+      jobs: boss,
       logger,
       demoAccounts: config.seedDemo ? DEMO_ACCOUNTS : null,
       clientDir: path.join(projectRoot, 'dist'),

@@ -29,6 +29,7 @@ const routes: Array<['post' | 'patch', string]> = [
   ['patch', '/api/account'],
   ['post', '/api/account/password'],
   ['patch', '/api/admin/users/:id'],
+  ['post', '/api/prints'],
 ];
 
 /** Bodies shaped like the real ones (right keys, any values) as well as anything at all. */
@@ -43,6 +44,8 @@ const body = fc.oneof(
       token: fc.jsonValue(),
       currentPassword: fc.jsonValue(),
       newPassword: fc.jsonValue(),
+      pattern: fc.jsonValue(),
+      options: fc.jsonValue(),
     },
     { requiredKeys: [] },
   ),

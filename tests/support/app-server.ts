@@ -6,7 +6,10 @@ import { pino } from 'pino';
 import { createApp, type AppDeps } from '../../server/app.ts';
 import { projectRoot } from '../../server/config.ts';
 import { freePort } from '../../server/db/postgres.ts';
+import type PgBoss from 'pg-boss';
+import { startJobs } from '../../server/jobs/jobs.ts';
 import { createMailer, type Mailer } from '../../server/modules/mail/mailer.ts';
+import { PrintsService, startPrintWorker } from '../../server/modules/prints/prints.service.ts';
 import { UsersService } from '../../server/modules/users/users.service.ts';
 import { DEMO_ACCOUNTS } from '../../server/seed/demo.ts';
 import { createTestDatabase, type TestDatabase } from './database.ts';
@@ -16,6 +19,7 @@ export interface TestApp {
   database: TestDatabase;
   mailer: Mailer;
   users: UsersService;
+  boss: PgBoss;
   close(): Promise<void>;
 }
 
@@ -32,6 +36,8 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
   const users = new UsersService(database.db);
   const mailer = await createMailer({ smtp: undefined, mailFrom: 'Blockwright <no-reply@blockwright.localhost>' });
   const sessionPool = new pg.Pool({ connectionString: database.url, max: 3 });
+  const boss = await startJobs(database.url, { supervise: false });
+  await startPrintWorker(boss, new PrintsService(database.db, boss), 0.5);
   const app = createApp({
     config: {
       env: options.env ?? 'test',
@@ -43,6 +49,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     sessionPool,
     sessionSecret: 'test-secret-that-is-long-enough-for-sessions',
     mailer,
+    jobs: boss,
     logger: pino({ level: 'silent' }),
     demoAccounts: DEMO_ACCOUNTS,
     ...(options.serveClient ? { clientDir: path.join(projectRoot, 'dist') } : {}),
@@ -52,7 +59,9 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     database,
     mailer,
     users,
+    boss,
     async close() {
+      await boss.stop({ graceful: false, wait: true });
       await mailer.close();
       await sessionPool.end();
       await database.drop();

@@ -1,6 +1,7 @@
 /**
  * Once per `vitest run`: a fresh, throw-away PostgreSQL cluster (fsync off) on a free loopback
- * port, with a template database migrated to the current schema and the demo studio seeded. Each test file clones the
+ * port, with a template database migrated to the current schema, pg-boss's schema installed and
+ * the demo studio seeded. Each test file clones the
  * template into a database of its own (see database.ts), so files run in parallel without
  * sharing rows.
  */
@@ -10,6 +11,7 @@ import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { freePort, startCluster } from '../../server/db/postgres.ts';
 import { openDatabase } from '../../server/db/database.ts';
+import { startJobs } from '../../server/jobs/jobs.ts';
 import { UsersService } from '../../server/modules/users/users.service.ts';
 import { seedDemo } from '../../server/seed/demo.ts';
 
@@ -31,6 +33,9 @@ export default async function setup(project: TestProject) {
   const db = await openDatabase(cluster.url(TEMPLATE_DATABASE));
   await seedDemo(new UsersService(db));
   await db.destroy();
+  // pg-boss installs its schema once here, so each cloned database starts with it.
+  const boss = await startJobs(cluster.url(TEMPLATE_DATABASE), { supervise: false });
+  await boss.stop({ graceful: false, wait: true });
   // The URL of the cluster's maintenance database; test files swap the database name.
   project.provide('pgUrlBase', cluster.url('postgres'));
   project.provide('pgTemplate', TEMPLATE_DATABASE);
