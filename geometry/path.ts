@@ -609,6 +609,14 @@ export interface FlatPoint {
  * point is not repeated at the end.
  */
 export function contourFlatten(c: Contour, tolerance = FLATNESS): FlatPoint[] {
+  return contourFlattenShared(c, tolerance).slice();
+}
+
+/**
+ * The same flattening as contourFlatten, without the copy: the memoised array itself, typed
+ * read-only, for callers that only read it (it is shared, so it must never be changed).
+ */
+export function contourFlattenShared(c: Contour, tolerance = FLATNESS): readonly FlatPoint[] {
   let byTolerance = FLATTEN_CACHE.get(c);
   if (!byTolerance) {
     byTolerance = new Map();
@@ -619,7 +627,7 @@ export function contourFlatten(c: Contour, tolerance = FLATNESS): FlatPoint[] {
     flat = flattenContour(c, tolerance);
     byTolerance.set(tolerance, flat);
   }
-  return flat.slice();
+  return flat;
 }
 
 /**
@@ -691,7 +699,7 @@ function segmentsIntersect(a: Point, b: Point, c: Point, d: Point): Point | null
  * sweep first asks whether there is anything to list).
  */
 export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCrossing[] {
-  const raw = contourFlatten(c, tolerance);
+  const raw = contourFlattenShared(c, tolerance);
   const flat = raw.filter((f, i) => i === 0 || vecDistance(f.point, raw[i - 1]!.point) > POINT_EPSILON);
   if (c.closed && flat.length > 1 && vecDistance(flat[0]!.point, flat[flat.length - 1]!.point) <= POINT_EPSILON) flat.pop();
   const n = flat.length;

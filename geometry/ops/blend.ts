@@ -24,6 +24,7 @@ import {
   type Contour,
   type Segment,
   contourFlatten,
+  contourFlattenShared,
   contourLength,
   contourNearest,
   contourOffsetOf,
@@ -209,7 +210,7 @@ function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: 
   const betaRange = contours.map((c) => {
     let min = Infinity;
     let max = -Infinity;
-    for (const f of contourFlatten(c, 0.05)) {
+    for (const f of contourFlattenShared(c, 0.05)) {
       const v = vecDot(f.point, g);
       min = Math.min(min, v);
       max = Math.max(max, v);

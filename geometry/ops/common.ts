@@ -5,7 +5,7 @@
 import {
   type Contour,
   type Path,
-  contourFlatten,
+  contourFlattenShared,
   contourSelfCrossings,
   pathFromSvg,
   pathToSvg,
@@ -81,7 +81,7 @@ export function pieceGrain(piece: Piece): Point {
 export function projectionRange(contour: Contour, direction: Point, origin: Point = { x: 0, y: 0 }): { min: number; max: number } {
   let min = Infinity;
   let max = -Infinity;
-  for (const f of contourFlatten(contour, 0.05)) {
+  for (const f of contourFlattenShared(contour, 0.05)) {
     const v = vecDot(vecSub(f.point, origin), direction);
     min = Math.min(min, v);
     max = Math.max(max, v);

@@ -22,7 +22,7 @@ import { EndType, FillRule, JoinType, areaD, inflatePathsD, unionD, type PathD }
 import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
-import { type Contour, contourFlatten, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
+import { type Contour, contourFlattenShared, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
@@ -68,7 +68,7 @@ function runsOf(piece: Piece, outline: Outline, contour: Contour, op: SeamAllowa
     })
     .filter((x) => x !== undefined);
   if (marks.length === 0) {
-    const pts = contourFlatten(contour, CUT_FLATNESS).map((f) => f.point);
+    const pts = contourFlattenShared(contour, CUT_FLATNESS).map((f) => f.point);
     return [{ points: [...pts, pts[0]!], width: effective(op.width) }];
   }
   // walk the loop from the first edge's start; gaps between edges get the default width
@@ -116,7 +116,7 @@ function removeSpikes(points: Point[]): Point[] {
 }
 
 function flatOpen(c: Contour): Point[] {
-  return contourFlatten(c, CUT_FLATNESS).map((f) => f.point);
+  return contourFlattenShared(c, CUT_FLATNESS).map((f) => f.point);
 }
 
 /** Outward normal of a clockwise (positive-area) contour at the direction d: −perp(d). */
@@ -157,7 +157,7 @@ function cornerPatch(corner: Point, before: Run, after: Run): Point[] | undefine
 export function cutLineByUnion(piece: Piece, outline: Outline, op: SeamAllowanceOp): Contour {
   let contour = outlineContour(outline);
   if (contourSignedArea(contour) < 0) contour = contourReverse(contour);
-  const polygon = toPathD(contourFlatten(contour, CUT_FLATNESS).map((f) => f.point));
+  const polygon = toPathD(contourFlattenShared(contour, CUT_FLATNESS).map((f) => f.point));
   const shapes: PathD[] = [polygon];
   if (piece.edges.length === 0) {
     // no named edges: one width all round, mitred corners
@@ -225,7 +225,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   let runs: Run[];
   let closedRun = false;
   if (piece.edges.length === 0) {
-    const pts = contourFlatten(contour, CUT_FLATNESS).map((f) => f.point);
+    const pts = contourFlattenShared(contour, CUT_FLATNESS).map((f) => f.point);
     runs = [{ points: [...pts, pts[0]!], width: effective(op.width) }];
     closedRun = true;
   } else {
@@ -240,7 +240,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       if (vecDistance(pts[pts.length - 1]!, next[0]!) > 1e-6) return undefined;
       for (let i = 1; i < pts.length; i++) total += vecDistance(pts[i - 1]!, pts[i]!);
     }
-    const flat = contourFlatten(contour, CUT_FLATNESS);
+    const flat = contourFlattenShared(contour, CUT_FLATNESS);
     let perimeter = 0;
     for (let i = 0; i < flat.length; i++) perimeter += vecDistance(flat[i]!.point, flat[(i + 1) % flat.length]!.point);
     if (Math.abs(total - perimeter) > 1e-6 * Math.max(1, perimeter)) return undefined;

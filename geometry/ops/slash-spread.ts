@@ -19,7 +19,7 @@
 import { z } from 'zod';
 import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
-import { type Path, segmentLength, segmentPoint, segmentTransform, type Segment, contourFlatten } from '../path.ts';
+import { type Path, segmentLength, segmentPoint, segmentTransform, type Segment, contourFlattenShared } from '../path.ts';
 import { TRUE_ZONE } from '../tolerance.ts';
 import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecRotateAbout, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, smoothThrough } from './common.ts';
@@ -130,7 +130,7 @@ export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpRe
     ...target,
     outlines: target.outlines.map((o) => {
       // nothing of the piece may lie behind the hinge on the moving side's far boundary
-      for (const f of contourFlatten(outlineContour(o), 0.1)) {
+      for (const f of contourFlattenShared(outlineContour(o), 0.1)) {
         const d = vecDistance(f.point, op.hinge);
         if (d < 1) continue;
         const s = side * vecAngleBetween(ray, vecSub(f.point, op.hinge));

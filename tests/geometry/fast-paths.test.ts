@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, parsePattern, pathFromSvg, pathToSvg, performOp, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, parsePattern, pathFromSvg, pathToSvg, performOp, smoothThrough } from '../../geometry/index.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
@@ -57,6 +57,24 @@ describe('flattening (fast path)', () => {
     const n = a.length;
     a.pop();
     expect(contourFlatten(contour, 0.01).length).toBe(n);
+  });
+
+  it('the shared (uncopied) flattening holds the very points a copy holds, asked before or after', () => {
+    fc.assert(
+      fc.property(cubic, fc.constantFrom(0.01, 0.02, 0.05), fc.boolean(), (c, tolerance, sharedFirst) => {
+        const contour = { segments: [{ kind: 'cubic' as const, from: c[0], c1: c[1], c2: c[2], to: c[3] }], closed: false };
+        const shared = sharedFirst ? contourFlattenShared(contour, tolerance) : undefined;
+        const copy = contourFlatten(contour, tolerance);
+        const again = shared ?? contourFlattenShared(contour, tolerance);
+        expect(again).not.toBe(copy);
+        expect(again.length).toBe(copy.length);
+        again.forEach((f, i) => {
+          expect(f.point).toBe(copy[i]!.point);
+          expect(f.t).toBe(copy[i]!.t);
+        });
+      }),
+      { numRuns: 100 },
+    );
   });
 });
 
