@@ -23,7 +23,7 @@
 import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
-import { type Path, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentLength, segmentPoint, type Segment } from '../path.ts';
+import { type Path, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentLength, type Segment } from '../path.ts';
 import { type Point, vecAdd, vecDot, vecPerp, vecScale } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, smoothThrough } from './common.ts';
 
@@ -42,8 +42,12 @@ const smoothstep = (u: number): number => (u <= 0 ? 0 : u >= 1 ? 1 : u * u * (3 
 
 interface Field {
   readonly displace: (p: Point) => Point;
+  /** The same as displace, for a point given by its coordinates (one object, made only when it moves). */
+  readonly displaceXY: (x: number, y: number) => Point;
   /** β-range where the field may be non-zero */
   readonly active: (p: Point) => boolean;
+  /** The same as active, for a point given by its coordinates (no object). */
+  readonly activeXY: (x: number, y: number) => boolean;
   /** False when no point of the convex hull of `points` can move (a quick reject). */
   readonly mayMove: (points: readonly Point[]) => boolean;
 }
@@ -88,12 +92,23 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
     return 1 - smoothstep((bt - bLevel) / op.below);
   };
   const weight = (p: Point): number => Math.max(0, (alpha(p) - centre) / half);
+  // The *XY forms below repeat weight, profile, vecDot, vecScale and vecAdd with the same
+  // arithmetic in the same order, so they give the very same numbers without the objects.
+  const [gx, gy, ax, ay] = [g.x, g.y, across.x, across.y];
+  const weightXY = (x: number, y: number): number => Math.max(0, (x * ax + y * ay - centre) / half);
   return {
     displace: (p) => {
       const w = weight(p) * profile(beta(p));
       return w === 0 ? p : vecAdd(p, vecScale(across, sign * op.amount * w));
     },
+    displaceXY: (x, y) => {
+      const w = weightXY(x, y) * profile(x * gx + y * gy);
+      if (w === 0) return { x, y };
+      const k = sign * op.amount * w;
+      return { x: x + ax * k, y: y + ay * k };
+    },
     active: (p) => weight(p) > 0 && profile(beta(p)) > 0,
+    activeXY: (x, y) => weightXY(x, y) > 0 && profile(x * gx + y * gy) > 0,
     mayMove: (points) => {
       const bs = points.map(beta);
       const lo = op.level === 'waist' ? -Infinity : bLevel - op.above;
@@ -109,11 +124,26 @@ function deformSegment(s: Segment, field: Field): Segment[] {
   const len = segmentLength(s, 1e-3);
   const m = Math.max(2, Math.ceil(len / 2));
   let moves = false;
-  for (let k = 0; k <= m && !moves; k++) moves = field.active(segmentPoint(s, k / m));
+  for (let k = 0; k <= m && !moves; k++) moves = pointAt(s, k / m, field.activeXY);
   if (!moves) return [s];
   const n = Math.max(2, Math.ceil(len / 3));
-  const pts = Array.from({ length: n + 1 }, (_, k) => field.displace(segmentPoint(s, k / n)));
+  const pts: Point[] = new Array<Point>(n + 1);
+  for (let k = 0; k <= n; k++) pts[k] = pointAt(s, k / n, field.displaceXY);
   return smoothThrough(pts);
+}
+
+/**
+ * f applied to segmentPoint(s, t) given as coordinates: the arithmetic of vecLerp (lines) and
+ * cubicPoint (cubics) inline, so no point object is made.
+ */
+function pointAt<T>(s: Segment, t: number, f: (x: number, y: number) => T): T {
+  if (s.kind === 'line') return f(s.from.x + (s.to.x - s.from.x) * t, s.from.y + (s.to.y - s.from.y) * t);
+  const mt = 1 - t;
+  const a = mt * mt * mt;
+  const b = 3 * mt * mt * t;
+  const d = 3 * mt * t * t;
+  const e = t * t * t;
+  return f(a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y);
 }
 
 function deformPath(path: Path, field: Field): Path {
