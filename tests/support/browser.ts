@@ -1,6 +1,11 @@
 import fs from 'node:fs';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, beforeAll, beforeEach } from 'vitest';
 import { installDebianPackages } from '../../server/system/debian.ts';
+import { startTestApp } from './app-server.ts';
 
 /** Debian's chromium; never a browser downloaded by a test tool. */
 export const CHROMIUM = '/usr/bin/chromium';
@@ -33,4 +38,55 @@ export function launchChromium(profileDir: string, viewport = { width: 1280, hei
     viewport,
     args: CHROMIUM_ARGS,
   });
+}
+
+export interface BrowserSession {
+  /** The app under test (fresh database, demo studio, built client). */
+  readonly url: string;
+  readonly context: BrowserContext;
+  /** The context's first page. */
+  readonly page: Page;
+}
+
+/**
+ * For a browser test file: start the app and a chromium before the tests, close both after,
+ * and sign out (clear cookies) before each test. Read the fields inside tests, not at load time.
+ */
+export function useBrowserSession(): BrowserSession {
+  let app: { url: string; close(): Promise<void> } | undefined;
+  let profileDir: string | undefined;
+  let context: BrowserContext | undefined;
+  let page: Page | undefined;
+  beforeAll(async () => {
+    app = await startTestApp();
+    profileDir = await mkdtemp(path.join(tmpdir(), 'blockwright-e2e-'));
+    context = await launchChromium(profileDir);
+    // Fail on the step that stalls, well inside the test's own time limit.
+    context.setDefaultTimeout(10_000);
+    page = context.pages()[0] ?? (await context.newPage());
+  });
+  afterAll(async () => {
+    await context?.close();
+    await app?.close();
+    if (profileDir) await rm(profileDir, { recursive: true, force: true });
+  });
+  // Each test starts signed out, whatever the one before it left behind.
+  beforeEach(async () => {
+    await context?.clearCookies();
+  });
+  const ready = <T>(value: T | undefined): T => {
+    if (value === undefined) throw new Error('the browser session is not started yet');
+    return value;
+  };
+  return {
+    get url() {
+      return ready(app).url;
+    },
+    get context() {
+      return ready(context);
+    },
+    get page() {
+      return ready(page);
+    },
+  };
 }
