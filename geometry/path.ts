@@ -527,7 +527,36 @@ function readBackOf(path: Path, decimals: number): Path {
     });
     if (c.closed) commands.push({ c: 'Z', v: [] });
   }
-  return buildPath(commands);
+  return keepUnchangedSegments(path, buildPath(commands));
+}
+
+/**
+ * `read` with each segment that has exactly the kind and coordinates of the segment at the
+ * same place in `path` replaced by that very object (equal values, so nothing changes; later
+ * memos by segment, such as the cubic flattenings, then find it). Contours whose segment count
+ * changed on reading are left as read.
+ */
+function keepUnchangedSegments(path: Path, read: Path): Path {
+  const source = path.filter((c) => c.segments.length > 0);
+  if (source.length !== read.length) return read;
+  return read.map((c, j) => {
+    const src = source[j]!.segments;
+    if (src.length !== c.segments.length) return c;
+    let segments: Segment[] | undefined;
+    for (let i = 0; i < src.length; i++) {
+      const a = src[i]!;
+      const b = c.segments[i]!;
+      if (sameSegment(a, b)) (segments ??= c.segments.slice())[i] = a;
+    }
+    return segments ? { closed: c.closed, segments } : c;
+  });
+}
+
+/** Same kind and the very same numbers (Object.is: −0 is not 0, which atan2 would tell apart). */
+function sameSegment(a: Segment, b: Segment): boolean {
+  const same = Object.is;
+  if (a.kind !== b.kind || !same(a.from.x, b.from.x) || !same(a.from.y, b.from.y) || !same(a.to.x, b.to.x) || !same(a.to.y, b.to.y)) return false;
+  return a.kind === 'line' || (b.kind === 'cubic' && same(a.c1.x, b.c1.x) && same(a.c1.y, b.c1.y) && same(a.c2.x, b.c2.x) && same(a.c2.y, b.c2.y));
 }
 
 /** A contour through the given points joined by straight lines. Fewer than 2 points give an empty contour. */
@@ -646,21 +675,47 @@ function flattenContour(c: Contour, tolerance: number): FlatPoint[] {
       out.push({ point: s.to, segmentIndex: i, t: 1 });
       return;
     }
-    const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
-    for (let k = 1; k < ts.length; k++) {
-      const t = ts[k]!;
-      // cubicPoint's arithmetic, inline
-      const mt = 1 - t;
-      const a = mt * mt * mt;
-      const b = 3 * mt * mt * t;
-      const d = 3 * mt * t * t;
-      const e = t * t * t;
-      const point = t === 1 ? s.to : { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
-      out.push({ point, segmentIndex: i, t });
-    }
+    const { ts, points } = cubicFlattening(s, tolerance);
+    for (let k = 1; k < ts.length; k++) out.push({ point: points[k]!, segmentIndex: i, t: ts[k]! });
   });
   if (c.closed && out.length > 1) out.pop();
   return out;
+}
+
+/** The flattening of one cubic: its parameters and points (points[0] unused). */
+interface CubicFlattening {
+  readonly tolerance: number;
+  readonly ts: readonly number[];
+  readonly points: readonly Point[];
+}
+
+/**
+ * Flattenings of single cubics by segment object (the last tolerance asked). A cubic flattens
+ * the same wherever it sits, so a contour that keeps most of its segments — an operation
+ * changes a few curves, and readBackOf hands the unchanged ones back as the very same objects —
+ * reflattens only the changed ones. Held weakly: no growth.
+ */
+const CUBIC_FLATTEN_CACHE = new WeakMap<Segment, CubicFlattening>();
+
+function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
+  const hit = CUBIC_FLATTEN_CACHE.get(s);
+  if (hit && hit.tolerance === tolerance) return hit;
+  const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
+  const points: Point[] = new Array<Point>(ts.length);
+  points[0] = s.from;
+  for (let k = 1; k < ts.length; k++) {
+    const t = ts[k]!;
+    // cubicPoint's arithmetic, inline
+    const mt = 1 - t;
+    const a = mt * mt * mt;
+    const b = 3 * mt * mt * t;
+    const d = 3 * mt * t * t;
+    const e = t * t * t;
+    points[k] = t === 1 ? s.to : { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
+  }
+  const f = { tolerance, ts, points };
+  CUBIC_FLATTEN_CACHE.set(s, f);
+  return f;
 }
 
 /** Where a contour crosses or touches itself. */

@@ -176,6 +176,32 @@ describe('contourNearest (memo)', () => {
   });
 });
 
+describe('flattening of shared cubics (memo by segment)', () => {
+  it('a contour reusing cubics another contour flattened first (same or other tolerance) flattens as the plain subdivision', () => {
+    fc.assert(
+      fc.property(fc.array(cubic, { minLength: 1, maxLength: 4 }), fc.constantFrom(0.01, 0.05), fc.constantFrom(0.01, 0.05), (cs, first, second) => {
+        const segments = cs.map((c) => ({ kind: 'cubic' as const, from: c[0], c1: c[1], c2: c[2], to: c[3] }));
+        // the first contour holds every other cubic; the second all of them, in reverse order
+        contourFlattenShared({ segments: segments.filter((_, i) => i % 2 === 0), closed: false }, first);
+        const order = [...segments.keys()].reverse();
+        const flat = contourFlatten({ segments: order.map((i) => segments[i]!), closed: false }, second);
+        const expected: { point: Point; segmentIndex: number; t: number }[] = [{ point: cs[order[0]!]![0], segmentIndex: 0, t: 0 }];
+        order.forEach((i, j) => {
+          const ts = referenceFlattenTimes(cs[i]!, second);
+          for (let k = 1; k < ts.length; k++) expected.push({ point: cubicPoint(cs[i]!, ts[k]!), segmentIndex: j, t: ts[k]! });
+        });
+        expect(flat.length).toBe(expected.length);
+        flat.forEach((f, k) => {
+          expect(f.segmentIndex).toBe(expected[k]!.segmentIndex);
+          expectNear(f.t, expected[k]!.t, 1e-15, `t[${k}]`);
+          expectPointNear(f.point, expected[k]!.point, 1e-9, `point ${k}`);
+        });
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
+
 describe('applyOps (path text printed once, at the end)', () => {
   const base = applyOps(demoPattern(), [{ op: 'blend', levels: [{ level: 'waist', size: '4' }, { level: 'knee', size: '10' }] }]).pattern;
   const op = fc.oneof(
