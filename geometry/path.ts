@@ -690,16 +690,24 @@ interface CubicFlattening {
 }
 
 /**
- * Flattenings of single cubics by segment object (the last tolerance asked). A cubic flattens
+ * Flattenings of single cubics by segment object (the last few tolerances asked: lengthen
+ * reads the extent at 0.05 mm, the self-crossing check flattens at FLATNESS). A cubic flattens
  * the same wherever it sits, so a contour that keeps most of its segments — an operation
  * changes a few curves, and readBackOf hands the unchanged ones back as the very same objects —
  * reflattens only the changed ones. Held weakly: no growth.
  */
-const CUBIC_FLATTEN_CACHE = new WeakMap<Segment, CubicFlattening>();
+const CUBIC_FLATTEN_CACHE = new WeakMap<Segment, CubicFlattening[]>();
+
+/** The most tolerances kept per cubic (the oldest is dropped). */
+const CUBIC_FLATTEN_KEEP = 3;
 
 function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
-  const hit = CUBIC_FLATTEN_CACHE.get(s);
-  if (hit && hit.tolerance === tolerance) return hit;
+  let kept = CUBIC_FLATTEN_CACHE.get(s);
+  if (!kept) {
+    kept = [];
+    CUBIC_FLATTEN_CACHE.set(s, kept);
+  }
+  for (const f of kept) if (f.tolerance === tolerance) return f;
   const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
   const points: Point[] = new Array<Point>(ts.length);
   points[0] = s.from;
@@ -714,7 +722,8 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
     points[k] = t === 1 ? s.to : { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
   }
   const f = { tolerance, ts, points };
-  CUBIC_FLATTEN_CACHE.set(s, f);
+  if (kept.length >= CUBIC_FLATTEN_KEEP) kept.shift();
+  kept.push(f);
   return f;
 }
 

@@ -129,38 +129,8 @@ export function bandMapSegment(m: BandMap, s: Segment): Segment[] {
 
 /** Where a segment meets each cut line, per cut line. */
 function cutsOf(m: BandMap, s: Segment): number[][] {
-  // Coordinates of the end and control points; a cut line that all of them clear on one side
-  // by more than CLEAR_MARGIN cannot meet the segment (it lies in the convex hull of those
-  // points), so the intersection search is skipped (see clearsCut). The search gives [] there
-  // too, except that for near-degenerate cubics it can report roots on a line the curve never
-  // reaches; splitting there only subdivided a part that one band maps by one affine map, so
-  // the mapped curve is the same (fewer pieces; property test against the plain search).
-  const q0 = m.coordinate(s.from);
-  const q3 = m.coordinate(s.to);
-  const q1 = s.kind === 'cubic' ? m.coordinate(s.c1) : q0;
-  const q2 = s.kind === 'cubic' ? m.coordinate(s.c2) : q3;
-  return m.breaks.map((b) => (clearsCut(q0 - b, q1 - b, q2 - b, q3 - b) ? [] : segmentLineIntersections(s, m.lineAt(b), m.direction)));
+  return m.breaks.map((b) => segmentLineIntersections(s, m.lineAt(b), m.direction));
 }
-
-/**
- * True when the four signed offsets (from a cut line, in any fixed scale) share one sign and the
- * nearest is farther than CLEAR_MARGIN × (1 + the largest): the curve (a convex combination of
- * them for t in [0, 1]) stays at least that far from the line, and the root search, which also
- * accepts roots up to PARAM_EPSILON = 1e-9 outside [0, 1] (where the curve can come nearer by at
- * most about 3 × 2 × largest × 1e-9), has nothing to find. The margin leaves three orders to
- * spare over that and over round-off in the search; the property test in
- * the property test compares with the full search.
- */
-function clearsCut(a: number, b: number, c: number, d: number): boolean {
-  const lo = Math.min(a, b, c, d);
-  const hi = Math.max(a, b, c, d);
-  const big = Math.max(Math.abs(lo), Math.abs(hi));
-  const margin = CLEAR_MARGIN * (1 + big);
-  return lo > margin || hi < -margin;
-}
-
-/** Relative margin of clearsCut (dimensionless); see there. */
-const CLEAR_MARGIN = 1e-6;
 
 function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
   const ts: number[] = [];
