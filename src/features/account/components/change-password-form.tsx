@@ -1,11 +1,10 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { TextField } from '../../../components/ui/text-field';
-import { useErrorFocus } from '../../../components/ui/use-error-focus';
+import { useFormErrors } from '../../../components/ui/use-form-errors';
 import {
-  formErrorsOf,
   newPasswordProblems,
   type FieldErrors,
   type KnownErrors,
@@ -24,13 +23,9 @@ export function ChangePasswordForm() {
   const [newPassword, setNewPassword] = useState('');
   const [repeat, setRepeat] = useState('');
   const [saved, setSaved] = useState(false);
-  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<unknown>(null);
-  const formRef = useRef<HTMLFormElement>(null);
   const change = useChangePassword();
-  useErrorFocus(formRef, failure);
 
-  const errors = formErrorsOf(clientErrors, change.error, knownErrors);
+  const { formRef, errors, accept, onError } = useFormErrors(change.error, knownErrors);
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -38,11 +33,7 @@ export function ChangePasswordForm() {
     const problems: FieldErrors = {};
     if (currentPassword === '') problems.currentPassword = 'Enter your current password.';
     Object.assign(problems, newPasswordProblems('newPassword', newPassword, repeat));
-    setClientErrors(problems);
-    if (Object.keys(problems).length > 0) {
-      setFailure({});
-      return;
-    }
+    if (!accept(problems)) return;
     change.mutate(
       { currentPassword, newPassword },
       {
@@ -52,7 +43,7 @@ export function ChangePasswordForm() {
           setNewPassword('');
           setRepeat('');
         },
-        onError: (error) => setFailure(error),
+        onError,
       },
     );
   }

@@ -1,9 +1,9 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
-import { useErrorFocus } from '../../../components/ui/use-error-focus';
-import { formErrorsOf, type FieldErrors } from '../../../lib/form-errors';
+import { useFormErrors } from '../../../components/ui/use-form-errors';
+import { type FieldErrors } from '../../../lib/form-errors';
 import type { User } from '../../../types/api';
 import { useUpdateAccount } from '../api/update-account';
 
@@ -16,13 +16,9 @@ export function DisplayNameForm({
 }) {
   const [displayName, setDisplayName] = useState(user.displayName);
   const [saved, setSaved] = useState(false);
-  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<unknown>(null);
-  const formRef = useRef<HTMLFormElement>(null);
   const update = useUpdateAccount({ onSuccess: onUpdated });
-  useErrorFocus(formRef, failure);
 
-  const errors = formErrorsOf(clientErrors, update.error);
+  const { formRef, errors, accept, onError } = useFormErrors(update.error);
   const unchanged = displayName.trim() === user.displayName;
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
@@ -30,14 +26,10 @@ export function DisplayNameForm({
     setSaved(false);
     const problems: FieldErrors =
       displayName.trim() === '' ? { displayName: 'Enter the name others will see.' } : {};
-    setClientErrors(problems);
-    if (problems.displayName) {
-      setFailure({});
-      return;
-    }
+    if (!accept(problems)) return;
     update.mutate(
       { displayName: displayName.trim() },
-      { onSuccess: () => setSaved(true), onError: (error) => setFailure(error) },
+      { onSuccess: () => setSaved(true), onError },
     );
   }
 

@@ -1,34 +1,26 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
-import { useErrorFocus } from '../../../components/ui/use-error-focus';
-import { emailProblem, formErrorsOf, type FieldErrors } from '../../../lib/form-errors';
+import { useFormErrors } from '../../../components/ui/use-form-errors';
+import { emailProblem } from '../../../lib/form-errors';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
 export function ForgotPasswordForm() {
   const [email, setEmail] = useState('');
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<unknown>(null);
-  const formRef = useRef<HTMLFormElement>(null);
   const request = useRequestPasswordReset();
-  useErrorFocus(formRef, failure);
 
-  const errors = formErrorsOf(clientErrors, request.error);
+  const { formRef, errors, accept, onError } = useFormErrors(request.error);
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const issue = emailProblem(email);
-    setClientErrors(issue ? { email: issue } : {});
-    if (issue) {
-      setFailure({});
-      return;
-    }
+    if (!accept(issue ? { email: issue } : {})) return;
     const address = email.trim();
     request.mutate(
       { email: address },
-      { onSuccess: () => setSentTo(address), onError: (error) => setFailure(error) },
+      { onSuccess: () => setSentTo(address), onError },
     );
   }
 

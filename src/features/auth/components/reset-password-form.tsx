@@ -1,12 +1,10 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { NewPasswordFields } from '../../../components/ui/new-password-fields';
-import { useErrorFocus } from '../../../components/ui/use-error-focus';
+import { useFormErrors } from '../../../components/ui/use-form-errors';
 import {
-  formErrorsOf,
   newPasswordProblems,
-  type FieldErrors,
   type KnownErrors,
 } from '../../../lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
@@ -21,23 +19,15 @@ const knownErrors: KnownErrors = {
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
   const [password, setPassword] = useState('');
   const [repeat, setRepeat] = useState('');
-  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<unknown>(null);
-  const formRef = useRef<HTMLFormElement>(null);
   const confirm = useConfirmPasswordReset();
-  useErrorFocus(formRef, failure);
 
-  const errors = formErrorsOf(clientErrors, confirm.error, knownErrors);
+  const { formRef, errors, accept, onError } = useFormErrors(confirm.error, knownErrors);
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const problems = newPasswordProblems('password', password, repeat);
-    setClientErrors(problems);
-    if (Object.keys(problems).length > 0) {
-      setFailure({});
-      return;
-    }
-    confirm.mutate({ token, password }, { onSuccess: onDone, onError: (error) => setFailure(error) });
+    if (!accept(problems)) return;
+    confirm.mutate({ token, password }, { onSuccess: onDone, onError });
   }
 
   return (

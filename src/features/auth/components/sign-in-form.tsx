@@ -1,11 +1,11 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { TextLink } from '../../../components/ui/text-link';
-import { useErrorFocus } from '../../../components/ui/use-error-focus';
+import { useFormErrors } from '../../../components/ui/use-form-errors';
 import { paths } from '../../../config/paths';
-import { emailProblem, formErrorsOf, type FieldErrors, type KnownErrors } from '../../../lib/form-errors';
+import { emailProblem, type FieldErrors, type KnownErrors } from '../../../lib/form-errors';
 import type { User } from '../../../types/api';
 import { useSignIn } from '../api/sign-in';
 
@@ -23,13 +23,9 @@ type SignInFormProps = {
 export function SignInForm({ onSignedIn, initialEmail = '', initialPassword = '' }: SignInFormProps) {
   const [email, setEmail] = useState(initialEmail);
   const [password, setPassword] = useState(initialPassword);
-  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<unknown>(null);
-  const formRef = useRef<HTMLFormElement>(null);
   const signIn = useSignIn({ onSuccess: onSignedIn });
-  useErrorFocus(formRef, failure);
 
-  const errors = formErrorsOf(clientErrors, signIn.error, knownErrors);
+  const { formRef, errors, accept, onError } = useFormErrors(signIn.error, knownErrors);
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -37,12 +33,8 @@ export function SignInForm({ onSignedIn, initialEmail = '', initialPassword = ''
     const emailIssue = emailProblem(email);
     if (emailIssue) problems.email = emailIssue;
     if (password === '') problems.password = 'Enter your password.';
-    setClientErrors(problems);
-    if (Object.keys(problems).length > 0) {
-      setFailure({});
-      return;
-    }
-    signIn.mutate({ email: email.trim(), password }, { onError: (error) => setFailure(error) });
+    if (!accept(problems)) return;
+    signIn.mutate({ email: email.trim(), password }, { onError });
   }
 
   return (

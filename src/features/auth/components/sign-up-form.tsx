@@ -1,11 +1,10 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
-import { useErrorFocus } from '../../../components/ui/use-error-focus';
+import { useFormErrors } from '../../../components/ui/use-form-errors';
 import {
   emailProblem,
-  formErrorsOf,
   MIN_PASSWORD_LENGTH,
   passwordProblem,
   type FieldErrors,
@@ -25,13 +24,9 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
   const [email, setEmail] = useState('');
   const [displayName, setDisplayName] = useState('');
   const [password, setPassword] = useState('');
-  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<unknown>(null);
-  const formRef = useRef<HTMLFormElement>(null);
   const signUp = useSignUp({ onSuccess: onSignedUp });
-  useErrorFocus(formRef, failure);
 
-  const errors = formErrorsOf(clientErrors, signUp.error, knownErrors);
+  const { formRef, errors, accept, onError } = useFormErrors(signUp.error, knownErrors);
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -41,14 +36,10 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
     if (displayName.trim() === '') problems.displayName = 'Enter the name others will see.';
     const passwordIssue = passwordProblem(password);
     if (passwordIssue) problems.password = passwordIssue;
-    setClientErrors(problems);
-    if (Object.keys(problems).length > 0) {
-      setFailure({});
-      return;
-    }
+    if (!accept(problems)) return;
     signUp.mutate(
       { email: email.trim(), displayName: displayName.trim(), password },
-      { onError: (error) => setFailure(error) },
+      { onError },
     );
   }
 
