@@ -6,13 +6,13 @@
 import { z } from 'zod';
 import type { Pattern } from '../model.ts';
 import { pathTextDeferred } from '../path.ts';
-import { type BlendOp, blendOpSchema, performBlend } from './blend.ts';
+import { blendOpSchema, performBlend } from './blend.ts';
 import { AlterationError, type Caution, type OpResult } from './common.ts';
-import { type GirthOp, girthOpSchema, performGirth } from './girth.ts';
-import { type LengthenOp, type RiseOp, lengthenOpSchema, performLengthen, performRise, riseOpSchema } from './lengthen.ts';
-import { type SeamAllowanceOp, performSeamAllowance, seamAllowanceOpSchema } from './seam-allowance.ts';
-import { type SlashSpreadOp, performSlashSpread, slashSpreadOpSchema } from './slash-spread.ts';
-import { type ShrinkageOp, performShrinkage, shrinkageOpSchema } from './shrinkage.ts';
+import { girthOpSchema, performGirth } from './girth.ts';
+import { lengthenOpSchema, performLengthen, performRise, riseOpSchema } from './lengthen.ts';
+import { performSeamAllowance, seamAllowanceOpSchema } from './seam-allowance.ts';
+import { performSlashSpread, slashSpreadOpSchema } from './slash-spread.ts';
+import { performShrinkage, shrinkageOpSchema } from './shrinkage.ts';
 
 export const alterationOpSchema = z.discriminatedUnion('op', [lengthenOpSchema, riseOpSchema, blendOpSchema, shrinkageOpSchema, seamAllowanceOpSchema, girthOpSchema, slashSpreadOpSchema]);
 export type AlterationOp = z.input<typeof alterationOpSchema>;
@@ -25,19 +25,19 @@ export function performOp(pattern: Pattern, input: AlterationOp): OpResult {
   const op = alterationOpSchema.parse(input);
   switch (op.op) {
     case 'lengthen':
-      return performLengthen(pattern, op as LengthenOp);
+      return performLengthen(pattern, op);
     case 'rise':
-      return performRise(pattern, op as RiseOp);
+      return performRise(pattern, op);
     case 'blend':
-      return performBlend(pattern, op as BlendOp);
+      return performBlend(pattern, op);
     case 'shrinkage':
-      return performShrinkage(pattern, op as ShrinkageOp);
+      return performShrinkage(pattern, op);
     case 'slash-spread':
-      return performSlashSpread(pattern, op as SlashSpreadOp);
+      return performSlashSpread(pattern, op);
     case 'girth':
-      return performGirth(pattern, op as GirthOp);
+      return performGirth(pattern, op);
     case 'seam-allowance':
-      return performSeamAllowance(pattern, op as SeamAllowanceOp);
+      return performSeamAllowance(pattern, op);
   }
 }
 
