@@ -7,7 +7,7 @@ import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { useBrowserSession } from '../support/browser.ts';
 
-const DEMO_PASSWORD = 'demo-password-1';
+import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 
 const session = useBrowserSession();
 

@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { useBrowserSession } from '../support/browser.ts';
 
 // The demo scenario's accounts, as the seed creates them (invented people).
-const DEMO_PASSWORD = 'demo-password-1';
+import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 const demo = {
   sewist: { email: 'ada@loomhollow.example', displayName: 'Ada Brightwater' },
   coach: { email: 'mina@loomhollow.example', displayName: 'Mina Okafor-Lund' },
