@@ -9,6 +9,7 @@ export * from './path.ts';
 export * from './model.ts';
 export * from './demo-pattern.ts';
 export * from './measure.ts';
+export * from './units.ts';
 export * from './ops/common.ts';
 export * from './ops/lengthen.ts';
 export * from './ops/blend.ts';
