@@ -1,26 +1,53 @@
 import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
 import { createBrowserRouter, type LoaderFunctionArgs } from 'react-router-dom';
 import { paths } from '../config/paths';
-import { usersQueryOptions } from '../features/admin-users/api/get-users';
-import { outboxQueryOptions } from '../features/admin-outbox/api/get-outbox';
 import { metaQueryOptions } from '../features/meta/api/get-meta';
 import { redirectIfSignedIn, requireUser } from './guards';
-import { adminRoles, coachRoles } from './navigation';
-import { AccountRoute } from './routes/account';
-import { AdminOutboxRoute } from './routes/admin-outbox';
-import { AdminUsersRoute } from './routes/admin-users';
-import { AppShell } from './routes/app-shell';
-import { AreaComingRoute } from './routes/area-coming';
-import { DashboardRoute } from './routes/dashboard';
+import type { Role } from '../types/api';
+import { adminRoles, coachRoles, type AreaId } from './navigation';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { GuestLayout } from './routes/guest-layout';
 import { NotFoundRoute } from './routes/not-found';
 import { ResetPasswordRoute } from './routes/reset-password';
-import { RoleGate } from './routes/role-gate';
 import { HydrateFallback, RootLayout } from './routes/root';
 import { RootErrorBoundary, RouteErrorBoundary } from './routes/route-error';
 import { SignInRoute } from './routes/sign-in';
 import { SignUpRoute } from './routes/sign-up';
+
+/*
+ * Code splitting: the guest pages (sign-in and its neighbours) are in the entry chunk; every
+ * signed-in page, the app shell and the role gate load on demand through the routes' `lazy`.
+ * Guards stay static loaders here, so they run at once, in parallel with fetching the page's
+ * code, exactly as before; loaders that need a feature's query options import them when they
+ * run. Pages drawing patterns (paper.js, geometry/) must only ever be reached through `lazy`.
+ */
+
+/** Only a route module's component: `lazy: page(() => import('./routes/x'), (m) => m.XRoute)`. */
+const page =
+  <M,>(load: () => Promise<M>, pick: (module: M) => ComponentType) =>
+  () =>
+    load().then((module) => ({ Component: pick(module) }));
+
+/** The "coming" page of an area, loaded on demand. */
+const areaComing = (areaId: AreaId) =>
+  page(
+    () => import('./routes/area-coming'),
+    ({ AreaComingRoute }) =>
+      function AreaComing() {
+        return <AreaComingRoute areaId={areaId} />;
+      },
+  );
+
+/** The role gate (a layout route), loaded on demand with the pages behind it. */
+const roleGate = (roles: readonly Role[]) =>
+  page(
+    () => import('./routes/role-gate'),
+    ({ RoleGate }) =>
+      function Gate() {
+        return <RoleGate roles={roles} />;
+      },
+  );
 
 /** Strip the leading slash: child routes take relative paths. */
 const child = (pattern: string) => pattern.replace(/^\//, '');
@@ -60,47 +87,53 @@ export function createRouter(queryClient: QueryClient) {
         {
           id: 'shell',
           loader: signedInOnly,
-          element: <AppShell />,
+          lazy: page(() => import('./routes/app-shell'), (m) => m.AppShell),
           children: [
             {
               errorElement: <RouteErrorBoundary />,
               children: [
-                { index: true, element: <DashboardRoute /> },
-                { path: child(paths.makes.pattern), element: <AreaComingRoute areaId="makes" /> },
-                { path: child(paths.patterns.pattern), element: <AreaComingRoute areaId="patterns" /> },
-                { path: child(paths.fitPlanner.pattern), element: <AreaComingRoute areaId="fitPlanner" /> },
-                { path: child(paths.fabrics.pattern), element: <AreaComingRoute areaId="fabrics" /> },
-                { path: child(paths.library.pattern), element: <AreaComingRoute areaId="library" /> },
-                { path: child(paths.account.pattern), element: <AccountRoute /> },
+                { index: true, lazy: page(() => import('./routes/dashboard'), (m) => m.DashboardRoute) },
+                { path: child(paths.makes.pattern), lazy: areaComing('makes') },
+                { path: child(paths.patterns.pattern), lazy: areaComing('patterns') },
+                { path: child(paths.fitPlanner.pattern), lazy: areaComing('fitPlanner') },
+                { path: child(paths.fabrics.pattern), lazy: areaComing('fabrics') },
+                { path: child(paths.library.pattern), lazy: areaComing('library') },
+                { path: child(paths.account.pattern), lazy: page(() => import('./routes/account'), (m) => m.AccountRoute) },
                 {
-                  element: <RoleGate roles={coachRoles} />,
+                  lazy: roleGate(coachRoles),
                   children: [
                     {
                       path: child(paths.coaching.pattern),
-                      element: <AreaComingRoute areaId="coaching" />,
+                      lazy: areaComing('coaching'),
                     },
                   ],
                 },
                 {
-                  element: <RoleGate roles={adminRoles} />,
+                  lazy: roleGate(adminRoles),
                   children: [
                     {
                       path: child(paths.adminUsers.pattern),
                       loader: async ({ request }) => {
                         const { allowed } = await requireUser(queryClient, request, adminRoles);
-                        if (allowed) await queryClient.ensureQueryData(usersQueryOptions());
+                        if (allowed) {
+                          const { usersQueryOptions } = await import('../features/admin-users/api/get-users');
+                          await queryClient.ensureQueryData(usersQueryOptions());
+                        }
                         return null;
                       },
-                      element: <AdminUsersRoute />,
+                      lazy: page(() => import('./routes/admin-users'), (m) => m.AdminUsersRoute),
                     },
                     {
                       path: child(paths.adminOutbox.pattern),
                       loader: async ({ request }) => {
                         const { allowed } = await requireUser(queryClient, request, adminRoles);
-                        if (allowed) await queryClient.ensureQueryData(outboxQueryOptions());
+                        if (allowed) {
+                          const { outboxQueryOptions } = await import('../features/admin-outbox/api/get-outbox');
+                          await queryClient.ensureQueryData(outboxQueryOptions());
+                        }
                         return null;
                       },
-                      element: <AdminOutboxRoute />,
+                      lazy: page(() => import('./routes/admin-outbox'), (m) => m.AdminOutboxRoute),
                     },
                   ],
                 },
