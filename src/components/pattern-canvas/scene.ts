@@ -1,0 +1,494 @@
+/**
+ * The paper.js side of the pattern canvas: one PaperScope per canvas, items kept between
+ * updates. `setPatterns` updates the existing items' path data when only shapes changed and
+ * rebuilds when the set of pieces, outlines, lines or landmarks changed. Browser only.
+ */
+import paperCore from 'paper/dist/paper-core';
+import {
+  contourLength,
+  contourLocationAtOffset,
+  contourNearest,
+  contourStretch,
+  outlineContour,
+  pathFromSvg,
+  pathToSvg,
+  segmentPoint,
+  segmentTangent,
+  vecNormalize,
+  vecPerp,
+  type Outline,
+  type Pattern,
+  type PatternLine,
+  type Piece,
+  type Point,
+} from '../../../geometry/index.ts';
+import { layoutPieces, type CanvasLayout } from './layout.ts';
+import type { ViewTransform } from './view-math.ts';
+
+type Scope = paper.PaperScope;
+type Item = paper.Item;
+
+/** Palette (src/styles.css @theme). */
+export const INK = {
+  ink900: '#1e2428',
+  ink700: '#3a444b',
+  ink500: '#646f77',
+  calico50: '#fcfaf5',
+  calico400: '#c5b697',
+  denim600: '#2f4f75',
+  denim700: '#243e5e',
+  chalk600: '#b1532e',
+  chalk700: '#8f4123',
+  tape400: '#e2b144',
+  sage700: '#3d6043',
+} as const;
+
+export type OverlayColour = 'ink' | 'denim' | 'chalk' | 'tape' | 'sage';
+const OVERLAY_INK: Record<OverlayColour, string> = { ink: INK.ink900, denim: INK.denim600, chalk: INK.chalk600, tape: INK.tape400, sage: INK.sage700 };
+
+/** Extra drawing in a piece's coordinates (mm). */
+export type CanvasOverlay =
+  | { kind: 'line'; piece: string; from: Point; to: Point; style?: { colour?: OverlayColour; dashed?: boolean; widthPx?: number } }
+  | { kind: 'point'; piece: string; at: Point; label?: string; colour?: OverlayColour }
+  | {
+      kind: 'handle';
+      id: string;
+      piece: string;
+      at: Point;
+      /** Unit vector: a drag moves the handle along this direction only. */
+      axis?: Point;
+      /** Accessible name, also shown beside the handle. */
+      label?: string;
+    };
+
+/** What to draw emphasised: a whole piece, one named edge of it, or one internal line. */
+export type CanvasHighlight = { piece: string; edge?: string; line?: string };
+
+/** Screen sizes (CSS px), kept constant while zooming. */
+const LABEL_PX = { piece: 14, line: 10, point: 11 };
+const DOT_PX = 2.5;
+const POINT_PX = 3.5;
+export const HANDLE_PX = 7;
+const DOUBLE_GAP_PX = 1.75;
+/** Physical sizes (mm): marks on the pattern itself. */
+const NOTCH_MM = 6;
+const ARROW_MM = 10;
+
+interface LineItems {
+  line: PatternLine;
+  main: paper.CompoundPath;
+  /** The second stroke of a lengthen/shorten line. */
+  twin?: paper.CompoundPath;
+  arrows?: paper.Path;
+  label: paper.PointText;
+}
+
+interface PieceItems {
+  group: paper.Group;
+  outlines: { outline: Outline; path: paper.CompoundPath; cut?: paper.CompoundPath; marks: Item[] }[];
+  lines: LineItems[];
+  label: paper.PointText;
+}
+
+/** Everything that decides which items exist (not where they are). */
+function structureKey(p: Pattern | undefined): string {
+  if (!p) return '';
+  return JSON.stringify(
+    p.pieces.map((piece) => [
+      piece.name,
+      piece.outlines.map((o) => [o.size, o.cut !== undefined, o.points.map((lm) => [lm.name, lm.kind])]),
+      piece.lines.map((l) => [l.role, l.name, l.size ?? null, pathFromSvg(l.d).length]),
+    ]),
+  );
+}
+
+function lineMidpoint(d: string): { point: Point; tangent: Point } | undefined {
+  const c = pathFromSvg(d)[0];
+  if (!c || c.segments.length === 0) return undefined;
+  const loc = contourLocationAtOffset(c, contourLength(c) / 2);
+  const seg = c.segments[loc.segmentIndex]!;
+  return { point: segmentPoint(seg, loc.t), tangent: vecNormalize(segmentTangent(seg, loc.t)) };
+}
+
+function lineEnds(d: string): { start: Point; end: Point } | undefined {
+  const c = pathFromSvg(d)[0];
+  const first = c?.segments[0];
+  const last = c?.segments[c.segments.length - 1];
+  return first && last ? { start: first.from, end: last.to } : undefined;
+}
+
+/** Arrowheads at both ends of a grainline (common practice, no source), ARROW_MM long. */
+function arrowData(d: string): string {
+  const ends = lineEnds(d);
+  if (!ends) return '';
+  const dir = vecNormalize({ x: ends.end.x - ends.start.x, y: ends.end.y - ends.start.y });
+  const n = vecPerp(dir);
+  const head = (tip: Point, back: Point) => {
+    const bx = tip.x + back.x * ARROW_MM;
+    const by = tip.y + back.y * ARROW_MM;
+    const w = ARROW_MM * 0.35;
+    return `M ${bx + n.x * w} ${by + n.y * w} L ${tip.x} ${tip.y} L ${bx - n.x * w} ${by - n.y * w}`;
+  };
+  return `${head(ends.end, { x: -dir.x, y: -dir.y })} ${head(ends.start, dir)}`;
+}
+
+export class PatternScene {
+  readonly scope: Scope;
+  private readonly referenceLayer: paper.Layer;
+  private readonly patternLayer: paper.Layer;
+  private readonly highlightLayer: paper.Layer;
+  private readonly overlayLayer: paper.Layer;
+  private pieces = new Map<string, PieceItems>();
+  private referenceGroups = new Map<string, { group: paper.Group; paths: paper.CompoundPath[] }>();
+  private key = '';
+  private referenceKey = '';
+  private pattern: Pattern | undefined;
+  private reference: Pattern | undefined;
+  private highlight: CanvasHighlight | undefined;
+  private overlays: readonly CanvasOverlay[] = [];
+  private scale = 1;
+  layout: CanvasLayout = { placements: new Map(), bounds: { minX: 0, minY: 0, maxX: 0, maxY: 0 } };
+  /** How many times the items were rebuilt (not just updated): for checks and debugging. */
+  rebuilds = 0;
+
+  constructor(canvas: HTMLCanvasElement) {
+    this.scope = new paperCore.PaperScope();
+    this.scope.setup(canvas);
+    this.scope.settings.insertItems = false;
+    const layer = () => {
+      const l = new this.scope.Layer();
+      this.scope.project.addLayer(l);
+      return l;
+    };
+    this.referenceLayer = layer();
+    this.highlightLayer = layer();
+    this.patternLayer = layer();
+    this.overlayLayer = layer();
+  }
+
+  /** Make this canvas's scope the active one before creating items (paper.js inserts into the active project). */
+  private activate(): void {
+    this.scope.activate();
+  }
+
+  destroy(): void {
+    this.scope.project.remove();
+    this.scope.view.remove();
+  }
+
+  setSize(width: number, height: number): void {
+    this.activate();
+    this.scope.view.viewSize = new this.scope.Size(Math.max(1, width), Math.max(1, height));
+  }
+
+  setView(t: ViewTransform): void {
+    this.activate();
+    this.scope.view.matrix = new this.scope.Matrix(t.scale, 0, 0, t.scale, t.tx, t.ty);
+    if (t.scale !== this.scale) {
+      this.scale = t.scale;
+      this.applyScreenSizes();
+    }
+  }
+
+  /** Draw `pattern` over `reference`. Updates path data in place unless the structure changed. */
+  setPatterns(pattern: Pattern, reference: Pattern | undefined): void {
+    this.activate();
+    this.pattern = pattern;
+    this.reference = reference;
+    this.layout = layoutPieces(pattern, reference);
+    const key = structureKey(pattern);
+    if (key !== this.key) {
+      this.key = key;
+      this.buildPattern(pattern);
+      this.rebuilds++;
+    } else {
+      this.updatePattern(pattern);
+    }
+    const refKey = structureKey(reference);
+    if (refKey !== this.referenceKey) {
+      this.referenceKey = refKey;
+      this.buildReference(reference);
+    } else if (reference) {
+      this.updateReference(reference);
+    }
+    this.placeGroups();
+    this.drawHighlight();
+    this.drawOverlays();
+    this.applyScreenSizes();
+  }
+
+  setHighlight(h: CanvasHighlight | undefined): void {
+    this.activate();
+    this.highlight = h;
+    this.drawHighlight();
+  }
+
+  setOverlays(overlays: readonly CanvasOverlay[]): void {
+    this.activate();
+    this.overlays = overlays;
+    this.drawOverlays();
+    this.applyScreenSizes();
+  }
+
+  private placeGroups(): void {
+    const place = (name: string, group: paper.Group) => {
+      const at = this.layout.placements.get(name);
+      group.matrix = new this.scope.Matrix(1, 0, 0, 1, at?.dx ?? 0, at?.dy ?? 0);
+    };
+    for (const [name, items] of this.pieces) place(name, items.group);
+    for (const [name, { group }] of this.referenceGroups) place(name, group);
+  }
+
+  private newGroup(layer: paper.Layer): paper.Group {
+    const group = new this.scope.Group();
+    group.applyMatrix = false;
+    layer.addChild(group);
+    return group;
+  }
+
+  private compound(d: string, style: Partial<paper.Style>): paper.CompoundPath {
+    const c = new this.scope.CompoundPath(d);
+    c.strokeScaling = false;
+    Object.assign(c, style);
+    return c;
+  }
+
+  private label(text: string, px: number, colour: string, weight: string | number = 'normal'): paper.PointText {
+    const t = new this.scope.PointText({ content: text, fillColor: colour, fontFamily: 'Figtree Variable, ui-sans-serif, sans-serif', fontWeight: weight, justification: 'center' });
+    t.data = { px };
+    return t;
+  }
+
+  private buildReference(reference: Pattern | undefined): void {
+    this.referenceLayer.removeChildren();
+    this.referenceGroups.clear();
+    if (!reference) return;
+    for (const piece of reference.pieces) {
+      const group = this.newGroup(this.referenceLayer);
+      const paths = piece.outlines.map((o) => {
+        const p = this.compound(o.d, { strokeColor: new this.scope.Color(INK.calico400), strokeWidth: 1 });
+        group.addChild(p);
+        return p;
+      });
+      this.referenceGroups.set(piece.name, { group, paths });
+    }
+  }
+
+  private updateReference(reference: Pattern): void {
+    for (const piece of reference.pieces) {
+      const items = this.referenceGroups.get(piece.name);
+      piece.outlines.forEach((o, i) => {
+        const p = items?.paths[i];
+        if (p) p.pathData = o.d;
+      });
+    }
+  }
+
+  private buildPattern(pattern: Pattern): void {
+    this.patternLayer.removeChildren();
+    this.pieces.clear();
+    for (const piece of pattern.pieces) {
+      const group = this.newGroup(this.patternLayer);
+      const single = piece.outlines.length === 1;
+      const outlines = piece.outlines.map((outline) => {
+        const cut = outline.cut !== undefined ? this.compound(outline.cut, { strokeColor: new this.scope.Color(INK.ink700), strokeWidth: 1 }) : undefined;
+        const path = this.compound(outline.d, {
+          strokeColor: new this.scope.Color(single ? INK.ink900 : INK.ink700),
+          strokeWidth: single ? 2 : 1,
+          ...(single ? { fillColor: new this.scope.Color(1, 1, 1, 0.35) } : {}),
+        });
+        if (cut) group.addChild(cut);
+        group.addChild(path);
+        const marks = outline.points.map((lm) => {
+          const item: Item =
+            lm.kind === 'notch'
+              ? Object.assign(new this.scope.Path(), { strokeColor: new this.scope.Color(INK.chalk700), strokeWidth: 1.5, strokeScaling: false })
+              : Object.assign(new this.scope.Shape.Circle(new this.scope.Point(0, 0), 1), {
+                  fillColor: new this.scope.Color(lm.kind === 'corner' ? INK.ink700 : INK.chalk600),
+                });
+          item.data = { landmark: lm.name, px: DOT_PX };
+          group.addChild(item);
+          return item;
+        });
+        return { outline, path, ...(cut ? { cut } : {}), marks };
+      });
+      const lines = piece.lines.map((line) => this.buildLine(group, line));
+      const label = this.label(piece.name, LABEL_PX.piece, INK.ink900, 600);
+      group.addChild(label);
+      this.pieces.set(piece.name, { group, outlines, lines, label });
+    }
+    this.updatePattern(pattern);
+  }
+
+  private buildLine(group: paper.Group, line: PatternLine): LineItems {
+    const colour = (hex: string) => new this.scope.Color(hex);
+    let main: paper.CompoundPath;
+    let twin: paper.CompoundPath | undefined;
+    let arrows: paper.Path | undefined;
+    switch (line.role) {
+      case 'grain':
+        main = this.compound(line.d, { strokeColor: colour(INK.denim700), strokeWidth: 1.25 });
+        arrows = Object.assign(new this.scope.Path(), { strokeColor: colour(INK.denim700), strokeWidth: 1.25, strokeScaling: false });
+        break;
+      case 'lengthen':
+        main = this.compound(line.d, { strokeColor: colour(INK.chalk600), strokeWidth: 1 });
+        twin = this.compound(line.d, { strokeColor: colour(INK.chalk600), strokeWidth: 1 });
+        break;
+      case 'level':
+        main = this.compound(line.d, { strokeColor: colour(INK.ink500), strokeWidth: 1, dashArray: [6, 4] });
+        break;
+      case 'fold':
+        main = this.compound(line.d, { strokeColor: colour(INK.denim600), strokeWidth: 1.5, dashArray: [12, 3, 2, 3] });
+        break;
+      default:
+        main = this.compound(line.d, { strokeColor: colour(INK.ink500), strokeWidth: 1 });
+    }
+    const label = this.label(line.name, LABEL_PX.line, line.role === 'lengthen' ? INK.chalk700 : INK.ink700);
+    for (const item of [main, twin, arrows, label]) if (item) group.addChild(item);
+    return { line, main, ...(twin ? { twin } : {}), ...(arrows ? { arrows } : {}), label };
+  }
+
+  private updatePattern(pattern: Pattern): void {
+    for (const piece of pattern.pieces) {
+      const items = this.pieces.get(piece.name);
+      if (!items) continue;
+      piece.outlines.forEach((outline, i) => {
+        const o = items.outlines[i];
+        if (!o) return;
+        o.outline = outline;
+        o.path.pathData = outline.d;
+        if (o.cut && outline.cut !== undefined) o.cut.pathData = outline.cut;
+      });
+      piece.lines.forEach((line, i) => {
+        const l = items.lines[i];
+        if (!l) return;
+        l.line = line;
+        l.main.pathData = line.d;
+        if (l.arrows) l.arrows.pathData = arrowData(line.d);
+      });
+    }
+  }
+
+  /** Positions that depend on the pattern and the zoom: labels, marks, the lengthen line's twin. */
+  private placeLabels(piece: Piece, items: PieceItems): void {
+    const mm = (px: number) => px / this.scale;
+    for (const o of items.outlines) {
+      const contour = outlineContour(o.outline);
+      o.outline.points.forEach((lm, i) => {
+        const item = o.marks[i];
+        if (!item) return;
+        if (item instanceof this.scope.Path) {
+          const near = contourNearest(contour, lm);
+          const seg = contour.segments[near.segmentIndex]!;
+          const n = vecPerp(vecNormalize(segmentTangent(seg, near.t)));
+          const h = NOTCH_MM / 2;
+          item.pathData = `M ${lm.x - n.x * h} ${lm.y - n.y * h} L ${lm.x + n.x * h} ${lm.y + n.y * h}`;
+        } else if (item instanceof this.scope.Shape) {
+          item.position = new this.scope.Point(lm.x, lm.y);
+          item.radius = mm(DOT_PX);
+        }
+      });
+    }
+    for (const l of items.lines) {
+      const mid = lineMidpoint(l.line.d);
+      if (mid) {
+        const n = vecPerp(mid.tangent);
+        l.label.fontSize = mm(LABEL_PX.line);
+        // beside the line, on the side away from the piece label above it
+        l.label.point = new this.scope.Point(mid.point.x - n.x * mm(6), mid.point.y - n.y * mm(6) + mm(LABEL_PX.line) / 3);
+        if (l.twin) {
+          l.main.pathData = l.line.d;
+          l.main.translate(new this.scope.Point(n.x * mm(DOUBLE_GAP_PX), n.y * mm(DOUBLE_GAP_PX)));
+          l.twin.pathData = l.line.d;
+          l.twin.translate(new this.scope.Point(-n.x * mm(DOUBLE_GAP_PX), -n.y * mm(DOUBLE_GAP_PX)));
+        }
+      }
+    }
+    const b = this.layout.placements.get(piece.name)?.bounds;
+    const first = items.outlines[0];
+    const fb = first ? first.path.bounds : undefined;
+    items.label.fontSize = mm(LABEL_PX.piece);
+    if (fb) items.label.point = new this.scope.Point(fb.center.x, fb.center.y);
+    else if (b) items.label.point = new this.scope.Point((b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
+  }
+
+  private applyScreenSizes(): void {
+    if (!this.pattern) return;
+    for (const piece of this.pattern.pieces) {
+      const items = this.pieces.get(piece.name);
+      if (items) this.placeLabels(piece, items);
+    }
+    for (const item of this.overlayLayer.getItems({ recursive: true })) {
+      const px = (item.data as { px?: number } | undefined)?.px;
+      if (px === undefined) continue;
+      if (item instanceof this.scope.Shape) item.radius = px / this.scale;
+      else if (item instanceof this.scope.PointText) {
+        const anchor = (item.data as { anchor: Point }).anchor;
+        item.fontSize = px / this.scale;
+        item.point = new this.scope.Point(anchor.x + 8 / this.scale, anchor.y - 6 / this.scale);
+      }
+    }
+  }
+
+  private drawHighlight(): void {
+    this.highlightLayer.removeChildren();
+    const h = this.highlight;
+    const piece = h && this.pattern?.pieces.find((p) => p.name === h.piece);
+    const at = piece && this.layout.placements.get(piece.name);
+    if (!h || !piece || !at) return;
+    const group = this.newGroup(this.highlightLayer);
+    group.matrix = new this.scope.Matrix(1, 0, 0, 1, at.dx, at.dy);
+    const mark = (d: string) => group.addChild(this.compound(d, { strokeColor: new this.scope.Color(INK.tape400), strokeWidth: 7, strokeCap: 'round', strokeJoin: 'round' }));
+    if (h.line !== undefined) {
+      for (const line of piece.lines) if (line.name === h.line) mark(line.d);
+    } else if (h.edge !== undefined) {
+      const edge = piece.edges.find((e) => e.name === h.edge || e.role === h.edge);
+      if (!edge) return;
+      for (const outline of piece.outlines) {
+        const from = outline.points.find((p) => p.name === edge.from);
+        const to = outline.points.find((p) => p.name === edge.to);
+        if (!from || !to) continue;
+        const c = outlineContour(outline);
+        mark(pathToSvg([contourStretch(c, contourNearest(c, from), contourNearest(c, to))]));
+      }
+    } else {
+      for (const outline of piece.outlines) mark(outline.d);
+    }
+  }
+
+  private drawOverlays(): void {
+    this.overlayLayer.removeChildren();
+    for (const o of this.overlays) {
+      const at = this.layout.placements.get(o.piece);
+      if (!at) continue;
+      const dx = at.dx;
+      const dy = at.dy;
+      if (o.kind === 'line') {
+        const path = new this.scope.Path.Line(new this.scope.Point(o.from.x + dx, o.from.y + dy), new this.scope.Point(o.to.x + dx, o.to.y + dy));
+        Object.assign(path, {
+          strokeColor: new this.scope.Color(OVERLAY_INK[o.style?.colour ?? 'chalk']),
+          strokeWidth: o.style?.widthPx ?? 1.5,
+          strokeScaling: false,
+          ...(o.style?.dashed ? { dashArray: [5, 4] } : {}),
+        });
+        this.overlayLayer.addChild(path);
+        continue;
+      }
+      const centre = new this.scope.Point(o.at.x + dx, o.at.y + dy);
+      const handle = o.kind === 'handle';
+      const dot = new this.scope.Shape.Circle(centre, 1);
+      Object.assign(dot, handle
+        ? { fillColor: new this.scope.Color(INK.calico50), strokeColor: new this.scope.Color(INK.denim600), strokeWidth: 2, strokeScaling: false }
+        : { fillColor: new this.scope.Color(OVERLAY_INK[o.colour ?? 'denim']) });
+      dot.data = { px: handle ? HANDLE_PX : POINT_PX };
+      this.overlayLayer.addChild(dot);
+      const text = o.label;
+      if (text) {
+        const t = this.label(text, LABEL_PX.point, INK.ink900, 600);
+        t.justification = 'left';
+        t.data = { px: LABEL_PX.point, anchor: { x: centre.x, y: centre.y } };
+        this.overlayLayer.addChild(t);
+      }
+    }
+  }
+}
