@@ -210,8 +210,11 @@ function collect(el: XmlElement, m: Affine, inherited: { piece?: string; size?: 
   for (const c of el.children) collect(c, here, ctx, out, skipped, depth + 1, where);
 }
 
-function pointInContour(p: { x: number; y: number }, c: Contour): boolean {
-  const pts = contourFlatten(c, 0.1).map((f) => f.point);
+function polygonOf(c: Contour): { x: number; y: number }[] {
+  return contourFlatten(c, 0.1).map((f) => f.point);
+}
+
+function pointInPolygon(p: { x: number; y: number }, pts: readonly { x: number; y: number }[]): boolean {
   let inside = false;
   for (let i = 0, j = pts.length - 1; i < pts.length; j = i++) {
     const a = pts[i]!;
@@ -219,6 +222,33 @@ function pointInContour(p: { x: number; y: number }, c: Contour): boolean {
     if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
   }
   return inside;
+}
+
+/** Distance from p to the polygon's edges. */
+function distanceToPolygon(p: { x: number; y: number }, pts: readonly { x: number; y: number }[]): number {
+  let best = Infinity;
+  for (let i = 0, j = pts.length - 1; i < pts.length; j = i++) {
+    const a = pts[j]!;
+    const b = pts[i]!;
+    const dx = b.x - a.x;
+    const dy = b.y - a.y;
+    const len2 = dx * dx + dy * dy;
+    const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2));
+    best = Math.min(best, Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy)));
+  }
+  return best;
+}
+
+/**
+ * Does `inner` nest inside `outer`? Graded size lines often share a stretch of outline (a centre
+ * front that does not grade) and cross where a length grades (a deeper crotch), so "inside" means
+ * at least 70 % of its points are inside the outer line or on it (within NEST_TOUCH).
+ */
+const NEST_TOUCH = 1;
+function nestsInside(inner: readonly { x: number; y: number }[], outer: readonly { x: number; y: number }[]): boolean {
+  let hits = 0;
+  for (const p of inner) if (pointInPolygon(p, outer) || distanceToPolygon(p, outer) <= NEST_TOUCH) hits++;
+  return hits >= 0.7 * inner.length;
 }
 
 /** Import an SVG document (text). Throws SvgImportError (or XmlError) with a clear message. */
@@ -260,26 +290,39 @@ export function importSvg(text: string): SvgImportResult {
   const unnamed = outlines.filter((o) => !o.piece);
   for (const o of outlines) if (o.piece) groups.set(o.piece, [...(groups.get(o.piece) ?? []), o]);
   if (unnamed.length > 0) {
-    notes.push('some outlines had no piece name: outlines nested inside one another were grouped as one piece, sizes numbered from the smallest');
+    notes.push('some outlines had no piece name: outlines nested inside one another were grouped as one piece (sizes the file does not name are numbered from the smallest)');
     const sorted = [...unnamed].sort((a, b) => contourArea(b.contour) - contourArea(a.contour));
-    const roots: (typeof outlines)[] = [];
+    const roots: { polygon: { x: number; y: number }[]; list: typeof outlines }[] = [];
     for (const o of sorted) {
-      const start = o.contour.segments[0]!.from;
-      const home = roots.find((r) => pointInContour(start, r[0]!.contour));
-      if (home) home.push(o);
-      else roots.push([o]);
+      const polygon = polygonOf(o.contour);
+      const home = roots.find((r) => nestsInside(polygon, r.polygon));
+      if (home) home.list.push(o);
+      else roots.push({ polygon, list: [o] });
     }
     let k = 1;
     for (const r of roots) {
       while (groups.has(`piece ${k}`)) k++;
-      groups.set(`piece ${k}`, r);
+      groups.set(`piece ${k}`, r.list);
     }
   }
+  // A line without a piece name belongs to the piece whose largest outline holds its middle.
+  const largest = [...groups].map(([name, list]) => ({ name, polygon: polygonOf(list.reduce((a, b) => (contourArea(b.contour) > contourArea(a.contour) ? b : a)).contour) }));
+  const homeOf = (line: PatternLine): string | undefined => {
+    if (groups.size === 1) return largest[0]!.name;
+    const pts = pathFromSvg(line.d).flatMap((c) => contourFlatten(c, 0.5).map((f) => f.point));
+    const a = pts[Math.floor((pts.length - 1) / 2)];
+    const b = pts[Math.ceil((pts.length - 1) / 2)];
+    const mid = a && b ? { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 } : undefined;
+    const home = mid && largest.find((g) => pointInPolygon(mid, g.polygon));
+    if (!home) notes.push(`line "${line.name}" lies outside every piece and was not imported`);
+    return home?.name;
+  };
+  const homes = new Map(lines.map((l) => [l, l.piece ?? homeOf(l.line)]));
   const pieces: Piece[] = [];
   for (const [name, list] of groups) {
     const bySize = [...list].sort((a, b) => contourArea(a.contour) - contourArea(b.contour));
     const outs: Outline[] = bySize.map((o, i) => ({ size: o.size ?? String(i + 1), d: pathToSvg([o.contour], 4), points: [] }));
-    const own = lines.filter((l) => l.piece === name || (!l.piece && groups.size === 1)).map((l) => l.line);
+    const own = lines.filter((l) => homes.get(l) === name).map((l) => l.line);
     pieces.push({ name, outlines: outs, lines: own, edges: [], cut: { count: 2, onFold: false }, seamAllowanceIncluded: false });
   }
   for (const l of lines) if (l.piece && !groups.has(l.piece)) throw new SvgImportError(`${l.where}: line "${l.line.name}" belongs to piece "${l.piece}", which has no outline`);

@@ -12,6 +12,7 @@ import type { DataSource } from 'typeorm';
 import type { Config } from './config.ts';
 import { apiNotFound, errorHandler } from './errors/error-handler.ts';
 import { csrf } from './http/csrf.ts';
+import { PATTERN_BODY_LIMIT } from './http/upload.ts';
 import { accountRouter } from './modules/account/account.router.ts';
 import { adminRouter } from './modules/admin/admin.router.ts';
 import { authRouter } from './modules/auth/auth.router.ts';
@@ -20,7 +21,13 @@ import { PasswordResetService } from './modules/auth/password-reset.service.ts';
 import { healthRouter } from './modules/health/health.router.ts';
 import type { Mailer } from './modules/mail/mailer.ts';
 import { metaRouter } from './modules/meta/meta.router.ts';
+import { makesRouter } from './modules/makes/makes.router.ts';
+import { MakesService } from './modules/makes/makes.service.ts';
+import { patternsRouter } from './modules/patterns/patterns.router.ts';
+import { PatternsService } from './modules/patterns/patterns.service.ts';
 import { printsRouter } from './modules/prints/prints.router.ts';
+import { profilesRouter } from './modules/profiles/profiles.router.ts';
+import { ProfilesService } from './modules/profiles/profiles.service.ts';
 import { PrintsService } from './modules/prints/prints.service.ts';
 import { UsersService } from './modules/users/users.service.ts';
 import type { DemoAccount } from './seed/demo.ts';
@@ -71,8 +78,12 @@ export function createApp(deps: AppDeps): Express {
 
   const api = express.Router();
   const json = express.json({ limit: '1mb' });
+  // A labelled pattern with all its size lines can be a few MB of path data.
+  const patternJson = express.json({ limit: PATTERN_BODY_LIMIT });
   // Print requests carry a whole pattern and parse their own, larger bodies.
-  api.use((req, res, next) => (req.path.startsWith('/prints') ? next() : json(req, res, next)));
+  api.use((req, res, next) =>
+    req.path.startsWith('/prints') ? next() : req.path.startsWith('/patterns') ? patternJson(req, res, next) : json(req, res, next),
+  );
   api.use(
     session({
       name: 'bw.sid',
@@ -101,7 +112,12 @@ export function createApp(deps: AppDeps): Express {
   );
   api.use('/account', accountRouter({ db: deps.db, users }));
   api.use('/admin', adminRouter({ users, mailer: deps.mailer }));
-  api.use('/prints', printsRouter({ prints: new PrintsService(deps.db, deps.jobs) }));
+  const patterns = new PatternsService(deps.db);
+  const makes = new MakesService(deps.db, patterns);
+  api.use('/patterns', patternsRouter({ patterns }));
+  api.use('/profiles', profilesRouter({ profiles: new ProfilesService(deps.db) }));
+  api.use('/makes', makesRouter({ makes }));
+  api.use('/prints', printsRouter({ prints: new PrintsService(deps.db, deps.jobs, makes) }));
   api.use(apiNotFound);
   app.use('/api', api);
 

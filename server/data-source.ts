@@ -5,9 +5,14 @@ import { PasswordResetTokenEntity } from './modules/auth/password-reset-token.en
 import { Foundation1764633600000 } from './migrations/1764633600000-Foundation.ts';
 import { PrintJobs1764720000000 } from './migrations/1764720000000-PrintJobs.ts';
 import { PrintJobEntity } from './modules/prints/print-job.entity.ts';
+import { Workspace1764806400000 } from './migrations/1764806400000-Workspace.ts';
+import { PatternEntity } from './modules/patterns/pattern.entity.ts';
+import { ProfileEntity } from './modules/profiles/profile.entity.ts';
+import { MakeEntity } from './modules/makes/make.entity.ts';
+import { MakeRevisionEntity } from './modules/makes/make-revision.entity.ts';
 
-export const entities = [UserEntity, PasswordResetTokenEntity, PrintJobEntity];
-export const migrations = [Foundation1764633600000, PrintJobs1764720000000];
+export const entities = [UserEntity, PasswordResetTokenEntity, PrintJobEntity, PatternEntity, ProfileEntity, MakeEntity, MakeRevisionEntity];
+export const migrations = [Foundation1764633600000, PrintJobs1764720000000, Workspace1764806400000];
 
 /** The app's DataSource. Schema changes go through migrations only (`synchronize` is off). */
 export function createDataSource(url: string): DataSource {

@@ -17,7 +17,6 @@ import { startCluster, type Cluster } from './db/postgres.ts';
 import { startJobs } from './jobs/jobs.ts';
 import { createMailer } from './modules/mail/mailer.ts';
 import { PrintsService, startPrintWorker } from './modules/prints/prints.service.ts';
-import { UsersService } from './modules/users/users.service.ts';
 import { DEMO_ACCOUNTS, seedDemo } from './seed/demo.ts';
 
 const DATABASE_NAME = 'blockwright';
@@ -80,7 +79,7 @@ async function main(): Promise<void> {
     const sessionPool = new pg.Pool({ connectionString: databaseUrl, max: 5 });
     cleanups.push(() => sessionPool.end());
 
-    if (config.seedDemo && (await seedDemo(new UsersService(db)))) say('Seeded the demo studio (Loomhollow Sewing Studio).');
+    if (config.seedDemo && (await seedDemo(db))) say('Seeded the demo studio (Loomhollow Sewing Studio).');
 
     const mailer = await createMailer(config);
     cleanups.push(() => mailer.close());

@@ -12,6 +12,8 @@ export type ErrorCode =
   | 'invalid_token'
   | 'last_admin'
   | 'conflict'
+  | 'stale_revision'
+  | 'in_use'
   | 'payload_too_large'
   | 'unprocessable'
   | 'too_many_attempts'

@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { AppError, type FieldErrors } from './app-error.ts';
 import { fieldErrorsOf } from '../http/parse.ts';
+import { UPLOAD_LIMIT_LABEL } from '../http/upload.ts';
 
 interface ErrorBody {
   error: { code: string; message: string; fields?: FieldErrors };
@@ -26,6 +27,10 @@ function translate(err: unknown): AppError | undefined {
   if (e.type === 'entity.parse.failed') return new AppError('invalid_json', 'The request body is not valid JSON.', 400);
   if (e.type === 'entity.too.large')
     return new AppError('payload_too_large', 'The request body is too large.', 413);
+  if (err instanceof Error && err.name === 'MulterError') {
+    if (e.code === 'LIMIT_FILE_SIZE') return new AppError('payload_too_large', `The file is larger than the ${String(UPLOAD_LIMIT_LABEL)} allowed.`, 413);
+    return new AppError('invalid_input', `The upload could not be read: ${err.message}.`, 400, { file: err.message });
+  }
   if (e.code === 'EBADCSRFTOKEN')
     return new AppError('csrf_invalid', 'The form expired or came from another site: reload and try again.', 403);
   if (typeof e.status === 'number' && e.status >= 400 && e.status < 500)

@@ -1,4 +1,4 @@
-import type { Role } from '../modules/users/user.entity.ts';
+import type { Role, Units } from '../modules/users/user.entity.ts';
 
 declare global {
   namespace Express {
@@ -8,6 +8,7 @@ declare global {
       email: string;
       displayName: string;
       role: Role;
+      units: Units;
       createdAt: Date;
     }
   }

@@ -13,7 +13,9 @@ import {
   affineApply,
   demoPattern,
   parsePattern,
+  pathFromSvg,
 } from '../../geometry/index.ts';
+import { multiSizeSvg } from '../support/pattern-svg.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const svg = (attrs: string, body: string) => `<?xml version="1.0"?>\n<svg xmlns="http://www.w3.org/2000/svg" ${attrs}>${body}</svg>`;
@@ -161,5 +163,35 @@ describe('SVG import — the demo pattern written as true-scale SVG reads back t
         expectNear(a, b, b * 1e-6);
       });
     });
+  });
+});
+
+describe('SVG import — unnamed pieces of a graded pattern', () => {
+  it('when graded size lines cross at the crotch and lines name no piece, then each piece keeps its sizes and its own lines', () => {
+    const r = importSvg(multiSizeSvg());
+    expect(r.pattern.pieces.map((p) => p.outlines.map((o) => o.size))).toEqual([
+      ['8', '10', '12'],
+      ['8', '10', '12'],
+    ]);
+    for (const piece of r.pattern.pieces) {
+      // 6 named lines (hip, crotch, thigh, knee, calf, rise) in each of 3 sizes.
+      expect(piece.lines).toHaveLength(18);
+      // every line's middle lies inside its own piece's largest outline
+      const outer = outlineContour(piece.outlines[2]!);
+      const b = contourBounds(outer);
+      for (const line of piece.lines) {
+        const lb = contourBounds(pathFromSvg(line.d)[0]!);
+        expect((lb.minX + lb.maxX) / 2).toBeGreaterThan(b.minX);
+        expect((lb.minX + lb.maxX) / 2).toBeLessThan(b.maxX);
+      }
+    }
+  });
+
+  it('when a line lies outside every piece, then it is left out with a note', () => {
+    const r = importSvg(
+      svg('width="400mm" height="100mm" viewBox="0 0 400 100"', '<rect x="0" y="0" width="100" height="100"/><rect x="200" y="0" width="100" height="100"/><path data-role="level" data-name="hip" d="M 120 50 L 180 50"/>'),
+    );
+    expect(r.pattern.pieces.every((p) => p.lines.length === 0)).toBe(true);
+    expect(r.notes.join(' ')).toMatch(/line "hip" lies outside every piece/);
   });
 });

@@ -12,7 +12,6 @@ import type { TestProject } from 'vitest/node';
 import { freePort, startCluster } from '../../server/db/postgres.ts';
 import { openDatabase } from '../../server/db/database.ts';
 import { startJobs } from '../../server/jobs/jobs.ts';
-import { UsersService } from '../../server/modules/users/users.service.ts';
 import { seedDemo } from '../../server/seed/demo.ts';
 
 const TEMPLATE_DATABASE = 'bw_template';
@@ -31,7 +30,7 @@ export default async function setup(project: TestProject) {
   const cluster = await startCluster({ dir, port: await freePort(), ephemeral: true });
   await cluster.createDatabase(TEMPLATE_DATABASE);
   const db = await openDatabase(cluster.url(TEMPLATE_DATABASE));
-  await seedDemo(new UsersService(db));
+  await seedDemo(db);
   await db.destroy();
   // pg-boss installs its schema once here, so each cloned database starts with it.
   const boss = await startJobs(cluster.url(TEMPLATE_DATABASE), { supervise: false });

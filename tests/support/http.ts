@@ -29,6 +29,14 @@ export class Client {
     return body === undefined ? req : req.send(body as object);
   }
 
+  /** A multipart upload of one file in field `file`, with optional text fields. */
+  async upload(url: string, file: { name: string; content: string | Buffer }, fields: Record<string, string> = {}) {
+    const token = this.token ?? (await this.csrf());
+    let req = this.agent.post(url).set('x-csrf-token', token);
+    for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+    return req.attach('file', Buffer.isBuffer(file.content) ? file.content : Buffer.from(file.content), file.name);
+  }
+
   /** Sign in; the session is regenerated, so the CSRF token is fetched afresh. */
   async signIn(email: string, password: string) {
     const res = await this.send('post', '/api/auth/sign-in', { email, password });

@@ -7,9 +7,15 @@ import type { DataSource } from 'typeorm';
 import { endSessionsOf } from '../auth/sessions.ts';
 import { displayNameSchema, newPasswordSchema } from '../users/users.schemas.ts';
 import type { UsersService } from '../users/users.service.ts';
+import { UNITS } from '../users/user.entity.ts';
 import { toUserDto } from '../users/users.mapper.ts';
 
-const renameSchema = z.object({ displayName: displayNameSchema });
+const settingsSchema = z
+  .object({
+    displayName: displayNameSchema.optional(),
+    units: z.enum(UNITS, { error: 'Units must be "in" or "cm".' }).optional(),
+  })
+  .refine((v) => v.displayName !== undefined || v.units !== undefined, { message: 'Send a display name or units.' });
 const passwordSchema = z.object({
   currentPassword: z.string({ error: 'Enter your current password.' }).min(1, 'Enter your current password.').max(1024),
   newPassword: newPasswordSchema,
@@ -21,8 +27,8 @@ export function accountRouter(deps: { db: DataSource; users: UsersService }): Ro
   router.use(requireUser);
 
   router.patch('/', async (req, res) => {
-    const { displayName } = parseInput(renameSchema, req.body, 'account');
-    const user = await deps.users.rename(currentUser(req).id, displayName);
+    const changes = parseInput(settingsSchema, req.body, 'account');
+    const user = await deps.users.updateSettings(currentUser(req).id, changes);
     res.json({ user: toUserDto(user) });
   });
 

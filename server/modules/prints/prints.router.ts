@@ -2,17 +2,22 @@ import express, { Router } from 'express';
 import { z } from 'zod';
 import { currentUser, requireUser } from '../../http/guards.ts';
 import { parseInput } from '../../http/parse.ts';
+import { PATTERN_BODY_LIMIT } from '../../http/upload.ts';
 import { idParamsSchema } from '../users/users.schemas.ts';
 import { toPrintJobDto } from './prints.mapper.ts';
 import type { PrintsService } from './prints.service.ts';
 
-/** A pattern with all its size lines can be a few MB of path data. */
-export const PRINT_BODY_LIMIT = '8mb';
-
-const createSchema = z.object({
-  pattern: z.unknown().refine((v) => typeof v === 'object' && v !== null, 'Send the pattern as a JSON object.'),
-  options: z.record(z.string(), z.unknown()).default({}),
-});
+const createSchema = z.union(
+  [
+    z.object({
+      pattern: z.unknown().refine((v) => typeof v === 'object' && v !== null, 'Send the pattern as a JSON object.'),
+      options: z.record(z.string(), z.unknown()).default({}),
+    }),
+    /** A make's newest revision, replayed on the server. */
+    z.object({ makeId: z.uuid({ error: 'Not a valid make id.' }), options: z.record(z.string(), z.unknown()).default({}) }),
+  ],
+  { error: 'Send either a pattern or a makeId, with options.' },
+);
 
 const safeFileName = (title: string) => title.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'pattern';
 
@@ -21,9 +26,9 @@ export function printsRouter(deps: { prints: PrintsService }): Router {
   const router = Router();
   router.use(requireUser);
 
-  router.post('/', express.json({ limit: PRINT_BODY_LIMIT }), async (req, res) => {
+  router.post('/', express.json({ limit: PATTERN_BODY_LIMIT }), async (req, res) => {
     const input = parseInput(createSchema, req.body, 'print request');
-    const job = await deps.prints.create(currentUser(req).id, input);
+    const job = await deps.prints.create(currentUser(req), input);
     res.status(202).location(`/api/prints/${job.id}`).json({ print: toPrintJobDto(job) });
   });
 

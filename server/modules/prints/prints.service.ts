@@ -4,6 +4,8 @@ import { PatternError, PrintError, parsePattern } from '../../../geometry/index.
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import { QUEUES } from '../../jobs/jobs.ts';
 import { PrintOptionsError, parsePrintOptions, printPattern } from '../print/print.service.ts';
+import type { MakesService } from '../makes/makes.service.ts';
+import type { Actor } from '../patterns/patterns.service.ts';
 import { PrintJobEntity } from './print-job.entity.ts';
 
 interface PrintJobData {
@@ -15,6 +17,7 @@ export class PrintsService {
   constructor(
     private readonly db: DataSource,
     private readonly boss: Pick<PgBoss, 'send'>,
+    private readonly makes?: Pick<MakesService, 'alteredPattern'>,
   ) {}
 
   private get repo() {
@@ -22,7 +25,8 @@ export class PrintsService {
   }
 
   /** Check the pattern and options now (a 4xx for bad input), then queue the work. */
-  async create(ownerId: string, input: { pattern: unknown; options: unknown }): Promise<PrintJobEntity> {
+  async create(actor: Actor, input: { pattern: unknown; options: Record<string, unknown> } | { makeId: string; options: Record<string, unknown> }): Promise<PrintJobEntity> {
+    const ownerId = actor.id;
     let options: ReturnType<typeof parsePrintOptions>;
     try {
       options = parsePrintOptions(input.options ?? {});
@@ -31,11 +35,17 @@ export class PrintsService {
       throw e;
     }
     let pattern: ReturnType<typeof parsePattern>;
+    let title = options.title;
     try {
-      pattern = parsePattern(input.pattern);
+      if ('makeId' in input) {
+        if (!this.makes) throw new AppError('not_found', 'Printing a make is not available here.', 404);
+        const altered = await this.makes.alteredPattern(actor, input.makeId);
+        pattern = altered.pattern;
+        title ??= altered.makeName;
+      } else pattern = parsePattern(input.pattern);
     } catch (e) {
       if (e instanceof PatternError)
-        throw new AppError('unprocessable', `The pattern cannot be read: ${e.message}`, 422, Object.fromEntries(e.issues.slice(0, 20).map((i) => [`pattern.${i.path}`, i.message])));
+        throw new AppError('unprocessable', `The pattern cannot be read: ${e.message}`, 422, Object.fromEntries(e.issues.slice(0, 20).map((i) => [`pattern.${i.path.replace(/\[(\d+)\]/g, '.$1')}`, i.message])));
       throw e;
     }
     const job = await this.repo.save(
@@ -44,7 +54,7 @@ export class PrintsService {
         status: 'queued',
         progress: 0,
         format: options.format,
-        title: options.title ?? pattern.name ?? 'Blockwright pattern',
+        title: title ?? pattern.name ?? 'Blockwright pattern',
         options: input.options as Record<string, unknown>,
         pattern,
         file: null,

@@ -3,6 +3,10 @@ import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateCol
 export const ROLES = ['sewist', 'coach', 'admin'] as const;
 export type Role = (typeof ROLES)[number];
 
+export const UNITS = ['in', 'cm'] as const;
+/** How lengths are shown to this person: inches with fractions, or centimetres. */
+export type Units = (typeof UNITS)[number];
+
 @Entity({ name: 'users' })
 export class UserEntity {
   @PrimaryGeneratedColumn('uuid')
@@ -20,6 +24,9 @@ export class UserEntity {
 
   @Column('text')
   role: Role;
+
+  @Column('text')
+  units: Units;
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;

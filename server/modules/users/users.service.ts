@@ -2,7 +2,7 @@ import bcrypt from 'bcryptjs';
 import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { AppError, notFound } from '../../errors/app-error.ts';
-import { UserEntity, type Role } from './user.entity.ts';
+import { UserEntity, type Role, type Units } from './user.entity.ts';
 
 /** bcrypt cost; 12 is ≈ 0.2 s per hash here (OWASP asks for at least 10). */
 export const BCRYPT_COST = 12;
@@ -66,8 +66,8 @@ export class UsersService {
     await this.repo.update({ id: userId }, { passwordHash });
   }
 
-  async rename(userId: string, displayName: string): Promise<UserEntity> {
-    await this.repo.update({ id: userId }, { displayName });
+  async updateSettings(userId: string, changes: { displayName?: string; units?: Units }): Promise<UserEntity> {
+    if (changes.displayName !== undefined || changes.units !== undefined) await this.repo.update({ id: userId }, changes);
     const user = await this.findById(userId);
     if (!user) throw notFound('The account');
     return user;

@@ -1,0 +1,40 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+
+/** One garment in progress: a pattern, a profile, a fabric note and the alteration revisions. */
+@Entity({ name: 'makes' })
+export class MakeEntity {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column('uuid', { name: 'owner_id' })
+  ownerId: string;
+
+  @Column('text')
+  name: string;
+
+  @Column('uuid', { name: 'pattern_id' })
+  patternId: string;
+
+  @Column('uuid', { name: 'profile_id', nullable: true })
+  profileId: string | null;
+
+  @Column('text', { name: 'fabric_note' })
+  fabricNote: string;
+
+  /** The make this one was started from ("sew it again"). */
+  @Column('uuid', { name: 'source_make_id', nullable: true })
+  sourceMakeId: string | null;
+
+  /** Number of the newest revision; 0 before the first save. Compared and set atomically. */
+  @Column('integer', { name: 'latest_revision' })
+  latestRevision: number;
+
+  @Column('timestamptz', { name: 'archived_at', nullable: true })
+  archivedAt: Date | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}

@@ -1,0 +1,49 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+
+export const PATTERN_SOURCES = ['svg', 'dxf', 'json', 'demo'] as const;
+export type PatternSource = (typeof PATTERN_SOURCES)[number];
+
+/** An uploaded pattern: the imported geometry (never the uploaded file), private until published. */
+@Entity({ name: 'patterns' })
+export class PatternEntity {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column('uuid', { name: 'owner_id' })
+  ownerId: string;
+
+  @Column('text')
+  name: string;
+
+  @Column('text', { name: 'source_format' })
+  sourceFormat: PatternSource;
+
+  /** The uploaded file's name, for the person's reference only. */
+  @Column('text', { name: 'source_name' })
+  sourceName: string;
+
+  /** The pattern in Blockwright's format (geometry/model.ts). */
+  @Column('jsonb', { select: false })
+  data: unknown;
+
+  @Column('integer', { name: 'piece_count' })
+  pieceCount: number;
+
+  /** Every size label found, smallest first. */
+  @Column('jsonb')
+  sizes: string[];
+
+  /** What the importer guessed and the person should check. */
+  @Column('jsonb', { name: 'import_notes' })
+  importNotes: string[];
+
+  /** Set when a coach published it to the shared library. */
+  @Column('timestamptz', { name: 'published_at', nullable: true })
+  publishedAt: Date | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}
