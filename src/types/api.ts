@@ -14,6 +14,8 @@ export const userSchema = z.object({
   email: z.string(),
   displayName: z.string(),
   role: roleSchema,
+  /** How lengths are shown: inches with fractions, or centimetres. */
+  units: z.enum(['in', 'cm']).default('in'),
   createdAt: z.string(),
 });
 export type User = z.infer<typeof userSchema>;
