@@ -19,6 +19,7 @@ export * from './make.ts';
 export * from './ops/seam-allowance.ts';
 export * from './ops/girth.ts';
 export * from './ops/slash-spread.ts';
+export * from './ops/mark-line.ts';
 export * from './xml.ts';
 export * from './svg-import.ts';
 export * from './dxf-import.ts';

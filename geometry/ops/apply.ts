@@ -9,12 +9,13 @@ import { pathTextDeferred } from '../path.ts';
 import { blendOpSchema, performBlend } from './blend.ts';
 import { AlterationError, type Caution, type OpResult } from './common.ts';
 import { girthOpSchema, performGirth } from './girth.ts';
+import { markLineOpSchema, performMarkLine } from './mark-line.ts';
 import { lengthenOpSchema, performLengthen, performRise, riseOpSchema } from './lengthen.ts';
 import { performSeamAllowance, seamAllowanceOpSchema } from './seam-allowance.ts';
 import { performSlashSpread, slashSpreadOpSchema } from './slash-spread.ts';
 import { performShrinkage, shrinkageOpSchema } from './shrinkage.ts';
 
-export const alterationOpSchema = z.discriminatedUnion('op', [lengthenOpSchema, riseOpSchema, blendOpSchema, shrinkageOpSchema, seamAllowanceOpSchema, girthOpSchema, slashSpreadOpSchema]);
+export const alterationOpSchema = z.discriminatedUnion('op', [lengthenOpSchema, riseOpSchema, blendOpSchema, shrinkageOpSchema, seamAllowanceOpSchema, girthOpSchema, slashSpreadOpSchema, markLineOpSchema]);
 export type AlterationOp = z.input<typeof alterationOpSchema>;
 
 /** The ops file of the command line: `{ "ops": [ … ] }`. */
@@ -38,6 +39,8 @@ export function performOp(pattern: Pattern, input: AlterationOp): OpResult {
       return performGirth(pattern, op);
     case 'seam-allowance':
       return performSeamAllowance(pattern, op);
+    case 'mark-line':
+      return performMarkLine(pattern, op);
   }
 }
 
