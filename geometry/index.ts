@@ -16,6 +16,7 @@ export * from './ops/blend.ts';
 export * from './ops/shrinkage.ts';
 export * from './ops/apply.ts';
 export * from './make.ts';
+export * from './labelling.ts';
 export * from './ops/seam-allowance.ts';
 export * from './ops/girth.ts';
 export * from './ops/slash-spread.ts';
