@@ -1,5 +1,5 @@
 import { useId, useRef, useState, type PointerEvent } from 'react';
-import { formatLength, LengthParseError, parseLength, type LengthUnit } from '../../../geometry/index.ts';
+import { formatLengthParts, LengthParseError, parseLength, type LengthUnit } from '../../../geometry/index.ts';
 import { Button } from '../ui/button';
 import { FormAlert } from '../ui/form-alert';
 import {
@@ -182,7 +182,7 @@ export function CalibrationPanel({
       </div>
       <p className="text-sm text-ink-700" aria-live="polite">
         {knownMm
-          ? `The bar is ${shownBar.toFixed(2)} px for ${formatLength(knownMm, unit)}: ${(shownBar / knownMm).toFixed(3)} px per mm.`
+          ? `The bar is ${shownBar.toFixed(2)} px for ${knownText(knownMm, unit)}: ${(shownBar / knownMm).toFixed(3)} px per mm.`
           : 'Enter the length on the ruler to size the bar.'}
       </p>
       <div className="flex flex-wrap gap-3">
@@ -207,6 +207,12 @@ export function CalibrationPanel({
       )}
     </div>
   );
+}
+
+/** The known width as typed units, with its millimetres when the rounding hides some. */
+function knownText(mm: number, unit: LengthUnit): string {
+  const shown = formatLengthParts(mm, unit);
+  return shown.exact ? shown.text : `${Number(mm.toFixed(2))} mm (about ${shown.text})`;
 }
 
 function tryParseLength(text: string, unit: LengthUnit): number | null {

@@ -191,7 +191,7 @@ export function PatternCanvas({
       const t = latest.current.transform;
       if (!t) return;
       e.preventDefault();
-      const rect = frame.getBoundingClientRect();
+      const rect = (canvasRef.current ?? frame).getBoundingClientRect();
       const delta = e.deltaMode === 1 ? e.deltaY * 16 : e.deltaY;
       const next = zoomAbout(t, wheelZoomFactor(delta), { x: e.clientX - rect.left, y: e.clientY - rect.top });
       latest.current.transform = next;
@@ -202,8 +202,9 @@ export function PatternCanvas({
     return () => frame.removeEventListener('wheel', onWheel);
   }, []);
 
+  // Relative to the canvas (inside the frame's border), where the view transform starts.
   const local = (e: { clientX: number; clientY: number }): Point => {
-    const rect = frameRef.current!.getBoundingClientRect();
+    const rect = canvasRef.current!.getBoundingClientRect();
     return { x: e.clientX - rect.left, y: e.clientY - rect.top };
   };
 

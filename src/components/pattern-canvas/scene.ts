@@ -171,9 +171,11 @@ export class PatternScene {
     this.scope.activate();
   }
 
+  /** Remove the project, its view (and the view's canvas listeners) and the scope itself. */
   destroy(): void {
-    this.scope.project.remove();
-    this.scope.view.remove();
+    // PaperScope#remove (paper-core 0.12.20: clear() removes every project and its view, then the
+    // scope leaves PaperScope._scopes) is missing from the bundled typings.
+    (this.scope as Scope & { remove(): void }).remove();
   }
 
   setSize(width: number, height: number): void {
