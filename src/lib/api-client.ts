@@ -81,16 +81,18 @@ async function send(
   headers: Record<string, string> = {},
 ): Promise<unknown> {
   let response: Response;
+  // A FormData body (a file upload) goes as multipart: the browser sets its type and boundary.
+  const form = body instanceof FormData;
   try {
     response = await fetch(API_BASE + path, {
       method,
       credentials: 'same-origin',
       headers: {
         Accept: 'application/json',
-        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+        ...(body === undefined || form ? {} : { 'Content-Type': 'application/json' }),
         ...headers,
       },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : form ? body : JSON.stringify(body),
     });
   } catch {
     throw new ApiError(0, 'network_error', 'Could not reach Blockwright. Check your connection and try again.');
@@ -143,6 +145,13 @@ export const apiClient = {
     parseWith(schema, await request('POST', path, body)),
   patch: async <S extends z.ZodType>(path: string, body: unknown, schema: S) =>
     parseWith(schema, await request('PATCH', path, body)),
+  /** A multipart form (file uploads), with the CSRF token like every other POST. */
+  postForm: async <S extends z.ZodType>(path: string, form: FormData, schema: S) =>
+    parseWith(schema, await request('POST', path, form)),
+  /** DELETE; the answer (usually 204 No Content) is ignored. */
+  delete: async (path: string) => {
+    await request('DELETE', path);
+  },
   /** For endpoints that answer 204 No Content (or a body the caller ignores). */
   postNoContent: async (path: string, body?: unknown) => {
     await request('POST', path, body ?? {});
