@@ -31,7 +31,19 @@ export const paths = {
       token ? `/reset-password?token=${encodeURIComponent(token)}` : '/reset-password',
   },
 
-  makes: { pattern: '/makes', build: () => '/makes' },
+  makes: {
+    pattern: '/makes',
+    /** `newFromPattern`: open the new-make form with that pattern chosen (the library links here). */
+    build: (options: { newFromPattern?: string; archived?: boolean } = {}) => {
+      const query = new URLSearchParams();
+      if (options.archived) query.set('show', 'archived');
+      if (options.newFromPattern) query.set('new', options.newFromPattern);
+      const search = query.toString();
+      return search ? `/makes?${search}` : '/makes';
+    },
+  },
+  /** One make's workspace. */
+  make: { pattern: '/makes/:id', build: (id: string) => `/makes/${encodeURIComponent(id)}` },
   patterns: { pattern: '/patterns', build: () => '/patterns' },
   fitPlanner: { pattern: '/fit-planner', build: () => '/fit-planner' },
   fabrics: { pattern: '/fabrics', build: () => '/fabrics' },
