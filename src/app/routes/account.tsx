@@ -3,6 +3,7 @@ import { PageHeading } from '../../components/ui/page-heading';
 import { Panel } from '../../components/ui/panel';
 import { ChangePasswordForm } from '../../features/account/components/change-password-form';
 import { DisplayNameForm } from '../../features/account/components/display-name-form';
+import { UnitsForm } from '../../features/account/components/units-form';
 import { setMe, useMe } from '../../features/auth/api/get-me';
 import { roleLabels } from '../../types/api';
 
@@ -31,6 +32,9 @@ export function AccountRoute() {
         </Panel>
         <Panel title="Password" description="You stay signed in on this device after the change.">
           <ChangePasswordForm />
+        </Panel>
+        <Panel title="Units" description="For every length you read or type: measurements, amounts of change, print margins.">
+          <UnitsForm user={user} onUpdated={(updated) => setMe(queryClient, updated)} />
         </Panel>
       </div>
     </>

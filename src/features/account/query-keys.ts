@@ -3,5 +3,6 @@
 export const accountKeys = {
   all: ['account'] as const,
   updateProfile: () => [...accountKeys.all, 'update-profile'] as const,
+  updateUnits: () => [...accountKeys.all, 'update-units'] as const,
   changePassword: () => [...accountKeys.all, 'change-password'] as const,
 };
