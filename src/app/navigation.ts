@@ -44,7 +44,7 @@ export const areas: readonly Area[] = [
     group: 'work',
     summary:
       'A make gathers one garment in progress: your measurements, the pattern, the fabric, each round of alterations, fit notes and photos, shared with a sewing friend or coach if you invite them.',
-    built: false,
+    built: true,
   },
   {
     id: 'patterns',
@@ -115,7 +115,7 @@ export const areas: readonly Area[] = [
     label: 'Account',
     to: paths.account.build(),
     group: 'self',
-    summary: 'Your display name and password.',
+    summary: 'Your display name, password and units (inches or centimetres).',
     built: true,
   },
 ];

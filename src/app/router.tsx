@@ -93,7 +93,18 @@ export function createRouter(queryClient: QueryClient) {
               errorElement: <RouteErrorBoundary />,
               children: [
                 { index: true, lazy: page(() => import('./routes/dashboard'), (m) => m.DashboardRoute) },
-                { path: child(paths.makes.pattern), lazy: areaComing('makes') },
+                {
+                  path: child(paths.makes.pattern),
+                  loader: async ({ request }) => {
+                    await requireUser(queryClient, request);
+                    const { makesQueryOptions } = await import('../features/makes/api/get-makes');
+                    const archived = new URL(request.url).searchParams.get('show') === 'archived';
+                    await queryClient.ensureQueryData(makesQueryOptions({ archived }));
+                    return null;
+                  },
+                  lazy: page(() => import('./routes/makes'), (m) => m.MakesRoute),
+                },
+                { path: child(paths.make.pattern), lazy: () => import('./routes/make-workspace') },
                 { path: child(paths.patterns.pattern), lazy: areaComing('patterns') },
                 { path: child(paths.fitPlanner.pattern), lazy: areaComing('fitPlanner') },
                 { path: child(paths.fabrics.pattern), lazy: areaComing('fabrics') },
