@@ -53,7 +53,7 @@ export const areas: readonly Area[] = [
     group: 'work',
     summary:
       'Upload trouser pattern pieces as SVG or DXF (ASTM D6673) with their nested size lines, then label each piece: grainline, hip, crotch and knee levels, lengthen/shorten lines, notches and seams.',
-    built: false,
+    built: true,
   },
   {
     id: 'fitPlanner',
@@ -79,8 +79,8 @@ export const areas: readonly Area[] = [
     to: paths.library.build(),
     group: 'together',
     summary:
-      'Patterns that sewists and coaches have chosen to share with everyone here, ready to start a make from.',
-    built: false,
+      'Patterns that coaches have published for everyone here, ready to start a make from.',
+    built: true,
   },
   {
     id: 'coaching',

@@ -105,10 +105,39 @@ export function createRouter(queryClient: QueryClient) {
                   lazy: page(() => import('./routes/makes'), (m) => m.MakesRoute),
                 },
                 { path: child(paths.make.pattern), lazy: () => import('./routes/make-workspace') },
-                { path: child(paths.patterns.pattern), lazy: areaComing('patterns') },
+                {
+                  path: child(paths.patterns.pattern),
+                  loader: async ({ request }) => {
+                    await requireUser(queryClient, request);
+                    const { patternsQueryOptions } = await import('../features/patterns/api/get-patterns');
+                    await queryClient.ensureQueryData(patternsQueryOptions('mine'));
+                    return null;
+                  },
+                  lazy: page(() => import('./routes/patterns'), (m) => m.PatternsRoute),
+                },
+                {
+                  path: child(paths.patternReview.pattern),
+                  loader: async ({ request, params }) => {
+                    await requireUser(queryClient, request);
+                    const { patternQueryOptions } = await import('../features/patterns/api/get-pattern');
+                    // A missing or private pattern shows its message on the page, not the error boundary.
+                    await queryClient.prefetchQuery(patternQueryOptions(params.id ?? ''));
+                    return null;
+                  },
+                  lazy: page(() => import('./routes/pattern-review'), (m) => m.PatternReviewRoute),
+                },
                 { path: child(paths.fitPlanner.pattern), lazy: areaComing('fitPlanner') },
                 { path: child(paths.fabrics.pattern), lazy: areaComing('fabrics') },
-                { path: child(paths.library.pattern), lazy: areaComing('library') },
+                {
+                  path: child(paths.library.pattern),
+                  loader: async ({ request }) => {
+                    await requireUser(queryClient, request);
+                    const { patternsQueryOptions } = await import('../features/patterns/api/get-patterns');
+                    await queryClient.ensureQueryData(patternsQueryOptions('library'));
+                    return null;
+                  },
+                  lazy: page(() => import('./routes/library'), (m) => m.LibraryRoute),
+                },
                 { path: child(paths.account.pattern), lazy: page(() => import('./routes/account'), (m) => m.AccountRoute) },
                 {
                   lazy: roleGate(coachRoles),

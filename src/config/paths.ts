@@ -45,6 +45,8 @@ export const paths = {
   /** One make's workspace. */
   make: { pattern: '/makes/:id', build: (id: string) => `/makes/${encodeURIComponent(id)}` },
   patterns: { pattern: '/patterns', build: () => '/patterns' },
+  /** One pattern: its review and labelling (owner) or a read-only view. */
+  patternReview: { pattern: '/patterns/:id', build: (id: string) => `/patterns/${encodeURIComponent(id)}` },
   fitPlanner: { pattern: '/fit-planner', build: () => '/fit-planner' },
   fabrics: { pattern: '/fabrics', build: () => '/fabrics' },
   library: { pattern: '/library', build: () => '/library' },
