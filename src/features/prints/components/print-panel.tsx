@@ -6,7 +6,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { useFormErrors } from '../../../components/ui/use-form-errors';
 import type { FieldErrors } from '../../../lib/form-errors';
 import type { PaperId } from '../../../../geometry/print/paper';
-import type { LengthUnit } from '../../../../geometry/units';
+import { formatLength, type LengthUnit } from '../../../../geometry/units';
 import { useCreatePrint } from '../api/create-print';
 import { usePrint } from '../api/get-print';
 import type { PrintOptions } from '../api/schemas';
@@ -223,7 +223,7 @@ export function PrintPanel({
             label="Margin"
             name="margin"
             inputMode="decimal"
-            hint={`The edge strip your printer leaves blank, in ${unitWord} unless you add a unit; 1/4 in suits most home printers.`}
+            hint={`The edge strip your printer leaves blank, in ${unitWord} unless you add a unit; ${formatLength(DEFAULT_MARGIN, units)} suits most home printers.`}
             value={lengthText(margin, units)}
             onChange={(event) => setMargin({ text: event.target.value })}
             error={errors.fields.margin}
