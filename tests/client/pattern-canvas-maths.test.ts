@@ -79,7 +79,7 @@ describe('layoutPieces', () => {
     expect(placements.get('yoke')!.dx).toBe(100 + PIECE_GAP_MM);
   });
 
-  it('never overlaps pieces and leaves exactly the gap between neighbours (property)', () => {
+  it('never overlaps pieces, keeps at least the gap between them, and fills shelves left to right (property)', () => {
     const box = fc.record({
       x: fc.double({ min: -500, max: 500, noNaN: true }),
       y: fc.double({ min: -500, max: 500, noNaN: true }),
@@ -90,28 +90,49 @@ describe('layoutPieces', () => {
       fc.property(fc.array(box, { minLength: 1, maxLength: 6 }), (boxes) => {
         const p = pattern(...boxes.map((b, i) => rect(`p${i}`, b.x, b.y, b.w, b.h)));
         const { placements } = layoutPieces(p);
-        let right = -Infinity;
-        boxes.forEach((b, i) => {
+        const placed = boxes.map((b, i) => {
           const at = placements.get(`p${i}`)!;
-          const left = b.x + at.dx;
-          expectNear(b.y + at.dy, 0, 1e-6, 'top');
-          if (i > 0) expectNear(left - right, PIECE_GAP_MM, 1e-6, 'gap');
-          right = b.x + b.w + at.dx;
+          return { left: b.x + at.dx, top: b.y + at.dy, right: b.x + b.w + at.dx, bottom: b.y + b.h + at.dy };
         });
+        expectNear(placed[0]!.left, 0, 1e-6, 'first left');
+        expectNear(placed[0]!.top, 0, 1e-6, 'first top');
+        for (let i = 0; i < placed.length; i++)
+          for (let j = i + 1; j < placed.length; j++) {
+            const a = placed[i]!;
+            const b = placed[j]!;
+            const apart = Math.max(b.left - a.right, a.left - b.right, b.top - a.bottom, a.top - b.bottom);
+            expect(apart).toBeGreaterThanOrEqual(PIECE_GAP_MM - 1e-6);
+          }
+        for (let i = 1; i < placed.length; i++) {
+          const a = placed[i - 1]!;
+          const b = placed[i]!;
+          // the next piece is either beside the last on its shelf (same top, exactly the gap) or starts a new shelf at the left
+          if (Math.abs(b.top - a.top) < 1e-6) expectNear(b.left - a.right, PIECE_GAP_MM, 1e-6, 'gap');
+          else {
+            expectNear(b.left, 0, 1e-6, 'new shelf left');
+            expect(b.top).toBeGreaterThan(a.top);
+          }
+        }
         // deterministic
         expect(layoutPieces(p)).toEqual(layoutPieces(p));
       }),
     );
   });
 
-  it('lays out the demo pattern without overlaps', () => {
+  it('lays out the demo pattern without overlaps, on more than one shelf (the waistband is long)', () => {
     const demo = demoPattern();
     const { placements } = layoutPieces(demo);
-    const spans = demo.pieces.map((piece) => {
+    const boxes = demo.pieces.map((piece) => {
       const at = placements.get(piece.name)!;
-      return [at.bounds.minX + at.dx, at.bounds.maxX + at.dx] as const;
+      return { left: at.bounds.minX + at.dx, right: at.bounds.maxX + at.dx, top: at.bounds.minY + at.dy, bottom: at.bounds.maxY + at.dy };
     });
-    for (let i = 1; i < spans.length; i++) expectNear(spans[i]![0] - spans[i - 1]![1], PIECE_GAP_MM, 1e-6);
+    for (let i = 0; i < boxes.length; i++)
+      for (let j = i + 1; j < boxes.length; j++) {
+        const a = boxes[i]!;
+        const b = boxes[j]!;
+        expect(Math.max(b.left - a.right, a.left - b.right, b.top - a.bottom, a.top - b.bottom)).toBeGreaterThanOrEqual(PIECE_GAP_MM - 1e-6);
+      }
+    expect(new Set(boxes.map((b) => Math.round(b.top))).size).toBeGreaterThan(1);
   });
 });
 

@@ -1,5 +1,5 @@
 /**
- * Where each piece sits on the canvas: side by side in a row, tops aligned, a gap between.
+ * Where each piece sits on the canvas: side by side on shelves, tops aligned, a gap between.
  * Pure (no DOM, no paper.js), so screens and tests can map coordinates the same way the
  * canvas does: world = piece point + { dx, dy }.
  */
@@ -56,29 +56,54 @@ export function pieceBounds(piece: Piece): Bounds {
 }
 
 /**
- * Place the pieces left to right in pattern order, tops at y = 0, `gap` mm apart. Sizes come
- * from `reference` when given (so pieces stay put while the altered outline changes); pieces
- * only in `pattern` follow, sized from `pattern`. Deterministic; the inputs are not changed.
+ * Place the pieces left to right in pattern order on shelves, `gap` mm apart: a shelf is at most
+ * as wide as the widest piece or 1.6 × the square root of the pieces' total box area, whichever
+ * is more (so a long waistband does not squeeze the legs into a strip); the next shelf starts
+ * below the tallest piece of the last. Sizes come from `reference` when given (so pieces stay
+ * put while the altered outline changes); pieces only in `pattern` follow, sized from `pattern`.
+ * Deterministic; the inputs are not changed.
  */
 export function layoutPieces(pattern: Pattern, reference?: Pattern, gap: number = PIECE_GAP_MM): CanvasLayout {
+  const order: Piece[] = [];
+  const seen = new Set<string>();
+  const add = (piece: Piece) => {
+    if (seen.has(piece.name)) return;
+    seen.add(piece.name);
+    order.push(piece);
+  };
+  if (reference) for (const piece of reference.pieces) if (pattern.pieces.some((p) => p.name === piece.name)) add(piece);
+  for (const piece of pattern.pieces) add(piece);
+
+  const boxes = order.map((piece) => ({ piece, bounds: pieceBounds(piece) }));
+  const sized = boxes.filter((b) => Number.isFinite(b.bounds.minX));
+  const widest = Math.max(0, ...sized.map((b) => b.bounds.maxX - b.bounds.minX));
+  const area = sized.reduce((a, b) => a + (b.bounds.maxX - b.bounds.minX + gap) * (b.bounds.maxY - b.bounds.minY + gap), 0);
+  const shelfWidth = Math.max(widest, 1.6 * Math.sqrt(area));
+
   const placements = new Map<string, PiecePlacement>();
-  let cursor = 0;
   let all = EMPTY;
-  const place = (piece: Piece) => {
-    if (placements.has(piece.name)) return;
-    const bounds = pieceBounds(piece);
+  let x = 0;
+  let y = 0;
+  let shelfHeight = 0;
+  for (const { piece, bounds } of boxes) {
     if (!Number.isFinite(bounds.minX)) {
-      placements.set(piece.name, { dx: cursor, dy: 0, bounds: { minX: 0, minY: 0, maxX: 0, maxY: 0 } });
-      return;
+      placements.set(piece.name, { dx: x, dy: y, bounds: { minX: 0, minY: 0, maxX: 0, maxY: 0 } });
+      continue;
     }
-    const dx = cursor - bounds.minX;
-    const dy = -bounds.minY;
+    const width = bounds.maxX - bounds.minX;
+    const height = bounds.maxY - bounds.minY;
+    if (x > 0 && x + width > shelfWidth) {
+      y += shelfHeight + gap;
+      x = 0;
+      shelfHeight = 0;
+    }
+    const dx = x - bounds.minX;
+    const dy = y - bounds.minY;
     placements.set(piece.name, { dx, dy, bounds });
     all = grow(all, { minX: bounds.minX + dx, minY: bounds.minY + dy, maxX: bounds.maxX + dx, maxY: bounds.maxY + dy });
-    cursor += bounds.maxX - bounds.minX + gap;
-  };
-  if (reference) for (const piece of reference.pieces) if (pattern.pieces.some((p) => p.name === piece.name)) place(piece);
-  for (const piece of pattern.pieces) place(piece);
+    x += width + gap;
+    shelfHeight = Math.max(shelfHeight, height);
+  }
   return { placements, bounds: Number.isFinite(all.minX) ? all : { minX: 0, minY: 0, maxX: 0, maxY: 0 } };
 }
 

@@ -1,0 +1,81 @@
+/**
+ * The measurements shown beside the drawing: each piece's named edges, the crotch length, the
+ * paired-seam report (front against back), each with what it was before a chosen alteration.
+ * Pure: numbers in millimetres from geometry/measure.ts.
+ */
+import {
+  crotchLength,
+  EDGE_ROLES,
+  type EdgeRole,
+  edgeLength,
+  MeasureError,
+  type PairedSeam,
+  pairedSeamReport,
+  type Pattern,
+  type Piece,
+} from '../../../../geometry/index.ts';
+
+export const EDGE_LABELS: Record<EdgeRole, string> = {
+  waist: 'Waist',
+  'centre-front': 'Centre front',
+  'centre-back': 'Centre back',
+  'crotch-curve': 'Crotch curve',
+  inseam: 'Inseam',
+  'side-seam': 'Side seam',
+  hem: 'Hem',
+  other: 'Other seam',
+};
+
+export interface MeasureRow {
+  key: string;
+  piece: string;
+  label: string;
+  now: number;
+  before?: number;
+}
+
+/** The size line measured in a piece: the one named `size` when it has it, else its only (or middle) one. */
+export function sizeShown(piece: Piece, size: string | undefined): string {
+  if (size !== undefined && piece.outlines.some((o) => o.size === size)) return size;
+  return piece.outlines[Math.floor((piece.outlines.length - 1) / 2)]!.size;
+}
+
+function edgeRows(pattern: Pattern, size: string | undefined): MeasureRow[] {
+  const rows: MeasureRow[] = [];
+  for (const piece of pattern.pieces) {
+    const s = sizeShown(piece, size);
+    for (const role of EDGE_ROLES) {
+      if (role === 'other' || !piece.edges.some((e) => e.role === role)) continue;
+      const length = edgeLength(piece, s, role);
+      if (length !== undefined) rows.push({ key: `${piece.name}:${role}`, piece: piece.name, label: EDGE_LABELS[role], now: length });
+    }
+  }
+  return rows;
+}
+
+function crotchRows(pattern: Pattern, size: string | undefined): MeasureRow[] {
+  const all = crotchLength(pattern);
+  const row = all.find((r) => r.size === size) ?? (all.length === 1 ? all[0] : undefined);
+  return row ? [{ key: 'crotch:total', piece: 'front + back', label: 'Crotch length', now: row.total }] : [];
+}
+
+/** Edge lengths and crotch length now, with `before` filled from the other pattern where it has the same thing. */
+export function measureRows(now: Pattern, before: Pattern | undefined, size: string | undefined): MeasureRow[] {
+  const rows = [...edgeRows(now, size), ...crotchRows(now, size)];
+  if (!before) return rows;
+  const old = new Map([...edgeRows(before, size), ...crotchRows(before, size)].map((r) => [r.key, r.now]));
+  return rows.map((r) => ({ ...r, before: old.get(r.key) }));
+}
+
+/** Front against back for inseam and side seam; empty when there is no front and back with those edges. */
+export function pairedSeams(pattern: Pattern, size: string | undefined): PairedSeam[] {
+  try {
+    const report = pairedSeamReport(pattern);
+    const sizes = [...new Set(report.map((r) => r.size))];
+    const chosen = size !== undefined && sizes.includes(size) ? size : sizes[Math.floor((sizes.length - 1) / 2)];
+    return report.filter((r) => r.size === chosen);
+  } catch (e) {
+    if (e instanceof MeasureError) return [];
+    throw e;
+  }
+}
