@@ -2,6 +2,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { AlterationEntry, LengthUnit, Pattern } from '../../../geometry/index.ts';
 import { isApiError } from '../../lib/api-client';
 import { getWorkspaceMake } from './api/get-make';
+import { getRevision } from './api/get-revisions';
 import { saveRevision } from './api/save-revision';
 import { describeIntent } from './model/describe';
 import { type Intent, applyIntent, invertIntent } from './model/intents';
@@ -146,9 +147,28 @@ export function useMakeEditor(options: {
 
   const change = useCallback((intent: Intent) => perform(intent, 'new'), [perform]);
 
+  /**
+   * Nothing to undo in this session (e.g. after a reload): undo the newest saved revision by
+   * going back to the one before it, as a new revision; redo goes forward again.
+   */
+  const undoSavedRevision = useCallback(async () => {
+    const { base, pending, entries } = stateRef.current;
+    if (base <= 1 || pending.length > 0) return;
+    const [previous, newest] = await Promise.all([getRevision(makeId, base - 1), getRevision(makeId, base)]);
+    const label = `Undid: ${newest.summary}`;
+    const error = perform({ kind: 'replace', entries: previous.alterations }, 'new', label);
+    if (error) return;
+    const redoStep: Step = { intent: { kind: 'replace', entries }, inverse: { kind: 'replace', entries: previous.alterations }, summary: newest.summary };
+    stateRef.current = { ...stateRef.current, undo: [], redo: [redoStep] };
+    setState(stateRef.current);
+  }, [makeId, perform]);
+
   const undo = useCallback(() => {
     const step = stateRef.current.undo.at(-1);
-    if (!step) return;
+    if (!step) {
+      void undoSavedRevision();
+      return;
+    }
     const before = stateRef.current.entries;
     const error = perform(step.inverse, 'undo', `Undid: ${step.summary}`);
     if (error) return;
@@ -156,7 +176,7 @@ export function useMakeEditor(options: {
     const redoStep: Step = { intent: step.intent, inverse: invertIntent(applyIntent(before, step.inverse), step.intent), summary: step.summary };
     stateRef.current = { ...stateRef.current, redo: [...stateRef.current.redo, redoStep] };
     setState(stateRef.current);
-  }, [perform]);
+  }, [perform, undoSavedRevision]);
 
   const redo = useCallback(() => {
     const step = stateRef.current.redo.at(-1);
@@ -208,9 +228,9 @@ export function useMakeEditor(options: {
       entries: state.entries,
       base: state.base,
       status,
-      canUndo: state.undo.length > 0,
+      canUndo: state.undo.length > 0 || (state.base > 1 && state.pending.length === 0),
       canRedo: state.redo.length > 0,
-      undoLabel: state.undo.at(-1)?.summary,
+      undoLabel: state.undo.at(-1)?.summary ?? (state.base > 1 ? `the change saved as revision ${state.base}` : undefined),
       redoLabel: state.redo.at(-1)?.summary,
       change,
       undo,
