@@ -240,6 +240,14 @@ function ReviewBody({ detail, initial, units, startMake }: { detail: PatternDeta
     if (next?.kind === 'notch') setOptions((o) => ({ ...o, notch: nextNotchName(piece) }));
   };
 
+  // Unsaved labels are not lost to a closed tab or a reload without the browser asking first.
+  useEffect(() => {
+    if (!dirty) return;
+    const onBeforeUnload = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', onBeforeUnload);
+    return () => window.removeEventListener('beforeunload', onBeforeUnload);
+  }, [dirty]);
+
   // Escape cancels the tool in use, wherever the focus is.
   useEffect(() => {
     if (!tool) return;
