@@ -92,7 +92,9 @@ const width = (b: { minX: number; maxX: number }) => b.maxX - b.minX;
 const boundsOf = (piece: Piece, size = '10') => contourBounds(outlineContour(piece.outlines.find((o) => o.size === size)!));
 
 describe('when a sewist uploads a multi-size SVG and labels it', () => {
-  it('then the pieces, sizes, lengthen/shorten lines and the clicked inseam are saved and shown again after a reload', async () => {
+  let labelled: { id: string; frontIndex: number; backIndex: number } | undefined;
+
+  it('then the pieces and sizes show, and the names, lengthen/shorten lines and the clicked inseam are saved', async () => {
     const page = session.page;
     await signIn(page, sewist);
     const id = await upload(page, 'Studio trousers');
@@ -175,6 +177,17 @@ describe('when a sewist uploads a multi-size SVG and labels it', () => {
       expect(Math.abs(got - want), `size ${size}: ${got} vs ${want}`).toBeLessThan(0.05);
     }
 
+    labelled = { id, frontIndex, backIndex };
+    await signOut(page);
+  });
+
+  // Follows the test above (its saved pattern), as the tests of a file run in order.
+  it('then a fresh visit shows the names and labels saved, and no publishing for a sewist', async () => {
+    const page = session.page;
+    if (!labelled) throw new Error('the labelling test above did not finish');
+    const { id, frontIndex, backIndex } = labelled;
+    await signIn(page, sewist);
+    await page.goto(`${session.url}/patterns/${id}`);
     await page.reload();
     await page.getByRole('heading', { name: 'Studio trousers', level: 1 }).waitFor();
     expect(await page.getByRole('textbox', { name: `Name of piece ${frontIndex + 1}` }).inputValue()).toBe('front');
