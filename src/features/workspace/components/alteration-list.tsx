@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { AlterationEntry, AppliedCaution, LengthUnit } from '../../../../geometry/index.ts';
 import { cx } from '../../../lib/cx';
 import { describeOp } from '../model/describe';
@@ -7,7 +8,7 @@ import type { Intent } from '../model/intents';
  * The make's alterations in order, beside the drawing: switch each on or off, move it up or
  * down, edit (select) or delete it. An entry the engine refuses is marked with the reason.
  */
-export function AlterationList({
+export const AlterationList = memo(function AlterationList({
   entries,
   unit,
   selectedId,
@@ -85,4 +86,4 @@ export function AlterationList({
       })}
     </ol>
   );
-}
+});

@@ -108,14 +108,27 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
     () => (handle && viewing === null ? [{ kind: 'handle', id: 'amount', piece: handle.piece, at: handlePoint(handle, liveAmount), axis: handle.axis, label: `Amount ${formatLength(liveAmount, unit, { signed: true })}` }] : []),
     [handle, liveAmount, unit, viewing],
   );
+  // Pointer moves come faster than frames: keep the newest and replay once per animation frame.
+  const dragFrame = useRef<{ op: AlterationOp; id: string; raf: number } | null>(null);
   const onHandleDrag = useCallback(
     (_id: string, point: Point, phase: 'start' | 'move' | 'end') => {
       if (!handle || !selected || !dragPrefix || (selected.op.op !== 'lengthen' && selected.op.op !== 'rise')) return;
       const op = { ...selected.op, amount: amountAt(handle, point, step) };
       if (phase !== 'end') {
-        const pattern = previewWith(dragPrefix, op);
-        if (pattern) setDraft({ id: selected.id, op, pattern });
+        if (dragFrame.current) {
+          dragFrame.current.op = op;
+          return;
+        }
+        const frame = { op: op as AlterationOp, id: selected.id, raf: 0 };
+        frame.raf = requestAnimationFrame(() => {
+          dragFrame.current = null;
+          const pattern = previewWith(dragPrefix, frame.op);
+          if (pattern) setDraft({ id: frame.id, op: frame.op, pattern });
+        });
+        dragFrame.current = frame;
       } else {
+        if (dragFrame.current) cancelAnimationFrame(dragFrame.current.raf);
+        dragFrame.current = null;
         setDraft(null);
         if (op.amount !== selected.op.amount) change({ kind: 'update', id: selected.id, op });
       }
@@ -262,7 +275,7 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
             <h2 id="alterations-heading" className="font-display text-lg text-ink-900">Alterations</h2>
             <AlterationList entries={entries} unit={unit} selectedId={selectedId} onSelect={select} onChange={change} error={committed.error} cautions={committed.cautions} />
           </section>
-          <MeasurementsPanel now={shown} before={viewing === null && !draft ? before : undefined} beforeLabel={compared ? `what “${describeOp(compared.op, unit)}” changed` : undefined} unit={unit} />
+          <MeasurementsPanel now={viewing !== null ? shown : committed.pattern} before={viewing === null ? before : undefined} beforeLabel={compared ? `what “${describeOp(compared.op, unit)}” changed` : undefined} unit={unit} />
         </aside>
       </div>
       {editor.status.kind === 'conflict' && <ConflictDialog message={editor.status.message} onReload={editor.reloadLatest} onApplyOnTop={editor.applyOnTop} />}

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { formatLength, type LengthUnit, PAIRED_SEAM_TOLERANCE, type Pattern } from '../../../../geometry/index.ts';
 import { cx } from '../../../lib/cx';
 import { EDGE_LABELS, measureRows, pairedSeams } from '../model/measurements';
@@ -7,7 +8,7 @@ import { EDGE_LABELS, measureRows, pairedSeams } from '../model/measurements';
  * made (`before` is the pattern without it), and the paired-seam report with a warning when
  * front and back differ by more than the usual tolerance.
  */
-export function MeasurementsPanel({ now, before, beforeLabel, unit, size }: { now: Pattern; before?: Pattern; beforeLabel?: string; unit: LengthUnit; size?: string }) {
+export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, beforeLabel, unit, size }: { now: Pattern; before?: Pattern; beforeLabel?: string; unit: LengthUnit; size?: string }) {
   const rows = measureRows(now, before, size);
   const pairs = pairedSeams(now, size);
   return (
@@ -68,4 +69,4 @@ export function MeasurementsPanel({ now, before, beforeLabel, unit, size }: { no
       )}
     </section>
   );
-}
+});
