@@ -116,3 +116,63 @@ describe('altering a make', () => {
     expect(await alterations.getByRole('listitem').count()).toBe(3);
   }, 120_000);
 });
+
+describe('two sessions on one make', () => {
+  it('when a second session saves from a stale revision, then it gets the conflict choice, and "apply my change on top" keeps both changes', async () => {
+    await signIn(session.page, 'ada@loomhollow.example');
+    const first = session.page;
+    const second = await session.context.newPage();
+    try {
+      await openMake(first, 'Everyday jeans');
+      await openMake(second, 'Everyday jeans');
+      const start = await savedAs(first);
+      expect(await savedAs(second)).toBe(start);
+
+      // The first session switches the rise off and saves.
+      await first.getByRole('checkbox', { name: 'Switch off: Raise the rise by 2 in' }).click();
+      expect(await savedAs(first)).toBe(start + 1);
+
+      // The second, still on the older revision, deletes the shortening: its save is refused.
+      await second.getByRole('button', { name: 'Delete: Shorten at “lower leg” by 3 in' }).click();
+      const dialog = second.getByRole('alertdialog', { name: 'This make changed while you worked' });
+      await dialog.waitFor();
+      await dialog.getByText(`the newest is ${start + 1}`).waitFor();
+      await second.screenshot({ path: `${shots}/workspace-conflict.png` });
+      await dialog.getByRole('button', { name: 'Apply my change on top' }).click();
+      await dialog.waitFor({ state: 'detached' });
+      expect(await savedAs(second)).toBe(start + 2);
+
+      // Both changes are in the newest revision: the rise is off and the shortening is gone.
+      await first.reload();
+      const list = first.getByRole('list', { name: 'Alterations' });
+      await list.getByRole('listitem').first().waitFor();
+      expect(await list.getByRole('listitem').count()).toBe(2);
+      expect(await first.getByRole('checkbox', { name: 'Switch on: Raise the rise by 2 in' }).isChecked()).toBe(false);
+      expect(await list.getByRole('listitem', { name: 'Shorten at “lower leg” by 3 in' }).count()).toBe(0);
+
+      // The other choice: the first session (now stale) changes something and reloads the newest instead.
+      await second.getByRole('checkbox', { name: 'Switch on: Raise the rise by 2 in' }).click();
+      expect(await savedAs(second)).toBe(start + 3);
+      await first.getByRole('button', { name: /^Delete: Blend sizes/ }).click();
+      await first.getByRole('alertdialog').getByRole('button', { name: 'Reload the newest revision' }).click();
+      await first.getByRole('alertdialog').waitFor({ state: 'detached' });
+      expect(await savedAs(first)).toBe(start + 3);
+      expect(await first.getByRole('checkbox', { name: 'Switch off: Raise the rise by 2 in' }).isChecked()).toBe(true);
+      expect(await first.getByRole('list', { name: 'Alterations' }).getByRole('listitem', { name: /^Blend sizes/ }).count()).toBe(1);
+
+      // The history keeps every revision, and an earlier one can be looked at and restored.
+      await first.getByRole('button', { name: 'History' }).click();
+      const revisions = first.getByRole('list', { name: 'Revisions' });
+      await revisions.getByText(`Revision ${start + 3}`).waitFor();
+      expect(await revisions.getByRole('listitem').count()).toBe(start + 3);
+      await revisions.getByRole('button', { name: `Look at revision ${start}` }).click();
+      const banner = first.getByRole('region', { name: 'Earlier revision' });
+      await banner.getByText(`Looking at revision ${start}`).waitFor();
+      await banner.getByRole('button', { name: `Restore revision ${start}` }).click();
+      expect(await savedAs(first)).toBe(start + 4);
+      expect(await first.getByRole('list', { name: 'Alterations' }).getByRole('listitem').count()).toBe(3);
+    } finally {
+      await second.close();
+    }
+  }, 120_000);
+});
