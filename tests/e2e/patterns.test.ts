@@ -202,6 +202,30 @@ describe('when a sewist uploads a multi-size SVG and labels it', () => {
     expect(await page.getByRole('button', { name: /^Publish / }).count()).toBe(0);
     await signOut(page);
   });
+
+  // Follows the tests above: the sewist alters a make started from the pattern they labelled.
+  it('then a make started from it shortens the legs 3 in at the marked line, and the measured inseam is 3 in shorter', async () => {
+    const page = session.page;
+    if (!labelled) throw new Error('the labelling test above did not finish');
+    await signIn(page, sewist);
+    await page.goto(`${session.url}/makes?new=${labelled.id}`);
+    await page.getByLabel('Name of the make').fill('Studio toile');
+    await page.getByRole('button', { name: 'Start the make' }).click();
+    await page.getByRole('link', { name: 'Open Studio toile' }).click();
+    await page.getByRole('heading', { name: 'Studio toile', level: 1 }).waitFor();
+    const tools = page.getByRole('region', { name: 'Tools' });
+    await tools.getByLabel('Lengthen/shorten line').selectOption('lower leg');
+    await tools.getByLabel('Amount').fill('-3');
+    await tools.getByLabel('Amount').press('Enter');
+    await tools.getByRole('button', { name: 'Shorten' }).click();
+    await page.getByRole('list', { name: 'Alterations' }).getByRole('listitem', { name: 'Shorten at “lower leg” by 3 in' }).waitFor();
+    // Trade fact (common practice, no source; issue 3): shortening the legs 3 in (76.2 mm) shortens the inseam by 3 in.
+    const change = Number(await page.getByRole('row', { name: 'front Inseam', exact: true }).locator('td[data-mm]').nth(1).getAttribute('data-mm'));
+    expect(Math.abs(change + 76.2)).toBeLessThan(0.3);
+    await page.getByRole('status', { name: 'Save status' }).getByText(/^Saved · revision 2$/).waitFor();
+    await page.screenshot({ path: path.join(screenshotDir, 'uploaded-pattern-make.png') });
+    await signOut(page);
+  }, 90_000);
 });
 
 describe('when a bad file is uploaded', () => {
