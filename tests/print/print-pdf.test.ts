@@ -257,3 +257,18 @@ describe('large-format PDF', () => {
     expect(checked).toBe(5);
   });
 });
+
+describe('progress while writing', () => {
+  it('when a background job follows the writing, then it hears once per page, in order, ending at the page count', async () => {
+    const pattern = applyOps(demoPattern(), [BLEND]).pattern;
+    const plan = planPrint(pattern, { paper: 'letter' });
+    const heard: [number, number][] = [];
+    const pdf = await renderPdf(plan, { title: 'Progress', date: '2026-12-02' }, (done, total) => {
+      heard.push([done, total]);
+    });
+    expect(heard.length).toBe(plan.pageCount);
+    expect(heard.map(([d]) => d)).toEqual(Array.from({ length: plan.pageCount }, (_, i) => i + 1));
+    expect(new Set(heard.map(([, t]) => t))).toEqual(new Set([plan.pageCount]));
+    expect((await readPdf(pdf)).numPages).toBe(plan.pageCount);
+  });
+});

@@ -101,8 +101,8 @@ class Writer {
   }
 }
 
-/** Render a plan to one PDF. */
-export async function renderPdf(plan: PrintPlan, words: SceneText): Promise<Buffer> {
+/** Render a plan to one PDF. `onPage(done, total)` is awaited after each page (a background job reports progress with it). */
+export async function renderPdf(plan: PrintPlan, words: SceneText, onPage?: (done: number, total: number) => Promise<void> | void): Promise<Buffer> {
   const doc = new PDFDocument({
     autoFirstPage: false,
     margin: 0,
@@ -125,9 +125,15 @@ export async function renderPdf(plan: PrintPlan, words: SceneText): Promise<Buff
   const groups = contentMarks(plan, words);
   if (plan.format === 'single') {
     w.page(sheetScene(plan, words), groups);
+    await onPage?.(1, 1);
   } else {
+    const total = plan.used.length + 1;
     w.page(coverScene(plan, words), groups);
-    plan.used.forEach((tile, i) => w.page(tileScene(plan, tile, i + 2, words), groups));
+    await onPage?.(1, total);
+    for (const [i, tile] of plan.used.entries()) {
+      w.page(tileScene(plan, tile, i + 2, words), groups);
+      await onPage?.(i + 2, total);
+    }
   }
   doc.end();
   await done;

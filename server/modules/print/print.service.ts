@@ -28,7 +28,12 @@ export function parsePrintOptions(input: unknown) {
   return r.data;
 }
 
-export async function printPattern(pattern: Pattern, input: PrintRequestInput, today: Date = new Date()): Promise<PrintResult> {
+export async function printPattern(
+  pattern: Pattern,
+  input: PrintRequestInput,
+  today: Date = new Date(),
+  onPage?: (done: number, total: number) => Promise<void> | void,
+): Promise<PrintResult> {
   const o = parsePrintOptions(input);
   const plan = planPrint(pattern, {
     paper: o.paper,
@@ -40,6 +45,6 @@ export async function printPattern(pattern: Pattern, input: PrintRequestInput, t
     spacing: o.spacing,
   });
   const words = { title: o.title ?? pattern.name ?? 'Blockwright pattern', date: o.date ?? today.toISOString().slice(0, 10) };
-  const data = o.format === 'pdf' ? await renderPdf(plan, words) : Buffer.from(renderSvg(plan, words), 'utf8');
+  const data = o.format === 'pdf' ? await renderPdf(plan, words, onPage) : Buffer.from(renderSvg(plan, words), 'utf8');
   return { format: o.format, data, plan, emptyPages: plan.format === 'tiled' ? plan.empty.map((t) => t.label) : [] };
 }

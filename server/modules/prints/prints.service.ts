@@ -94,7 +94,14 @@ export class PrintsService {
     if (!job || job.status === 'done') return;
     await this.repo.update({ id }, { status: 'running', progress: 10 });
     try {
-      const result = await printPattern(parsePattern(job.pattern), job.options);
+      // Progress: 10 % when started, then by pages written (stored in steps of 10 %), 100 % when kept.
+      let shown = 10;
+      const result = await printPattern(parsePattern(job.pattern), job.options, new Date(), async (done, total) => {
+        const progress = 10 + Math.floor((80 * done) / total);
+        if (progress - shown < 10) return;
+        shown = progress;
+        await this.repo.update({ id }, { progress });
+      });
       await this.repo.update(
         { id },
         {
