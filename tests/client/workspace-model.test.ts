@@ -105,6 +105,24 @@ describe('replay in the browser and the drag preview', () => {
     expect(amountAt(rise, handlePoint(rise, 50.8), 0)).toBeCloseTo(50.8, 9);
   });
 
+  it('the handle of a slash and spread moves across the slash, toward the part that turns: dragging that way opens it', () => {
+    const before = applyOps(demo, [BLEND]).pattern;
+    const op = { op: 'slash-spread' as const, piece: 'back', from: { x: 200, y: 190 }, hinge: { x: -170, y: 192 }, amount: 15, move: 'waist' as const };
+    const h = amountHandle(before, op)!;
+    // across the slash
+    expect(Math.abs(h.axis.x * (op.hinge.x - op.from.x) + h.axis.y * (op.hinge.y - op.from.y))).toBeLessThan(1e-9);
+    // the waist side turns: the axis points up the piece (against the grain, y down)
+    expect(h.axis.y).toBeLessThan(0);
+    expect(amountAt(h, handlePoint(h, 15), 0)).toBeCloseTo(15, 9);
+    // opening by +15 moves the waist-side corner at the side seam along the axis
+    const back = (p: typeof before) => p.pieces.find((x) => x.name === 'back')!;
+    const corner = (p: typeof before) => back(p).outlines[0]!.points.find((q) => q.name === 'top-side')!;
+    const after = applyOps(before, [op]).pattern;
+    const moved = { x: corner(after).x - corner(before).x, y: corner(after).y - corner(before).y };
+    // (the corner is farther up than the slash, so only part of its turn lies along the axis)
+    expect(moved.x * h.axis.x + moved.y * h.axis.y).toBeGreaterThan(1);
+  });
+
   it('the measurements show what shortening 3 in did: inseam and side seam −76.2 mm, crotch unchanged', () => {
     // Trade fact (common practice, no source; issue 3): shortening the legs 3 in shortens inseam and outseam by 3 in.
     const now = replayAlterations(demo, entries.slice(0, 2)).pattern;

@@ -7,7 +7,7 @@ import { cx } from '../../../lib/cx';
 import type { WorkspaceMake } from '../api/schemas';
 import type { WorkspacePattern } from '../api/get-pattern';
 import { useRevision } from '../api/get-revisions';
-import { amountAt, amountHandle, handlePoint } from '../model/handles';
+import { amountAt, amountHandle, handlePoint, hasAmountHandle } from '../model/handles';
 import { describeOp } from '../model/describe';
 import { newEntryId } from '../model/intents';
 import { previewWith, prefixFor, replaySafely } from '../model/replay';
@@ -64,7 +64,7 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
   // drag handler; a position the engine refuses keeps the last good preview.
   const [draft, setDraft] = useState<{ id: string; op: AlterationOp; pattern: Pattern } | null>(null);
   const dragPrefix = useMemo(
-    () => (selected && (selected.op.op === 'lengthen' || selected.op.op === 'rise') ? prefixFor(base, entries, selected.id) : undefined),
+    () => (selected && hasAmountHandle(selected.op) ? prefixFor(base, entries, selected.id) : undefined),
     [base, entries, selected],
   );
   const handle = useMemo(() => (dragPrefix && selected ? amountHandle(dragPrefix.before, selected.op) : undefined), [dragPrefix, selected]);
@@ -93,7 +93,7 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
       const existingBlend = op.op === 'blend' ? entries.find((e) => e.op.op === 'blend') : undefined;
       if (existingBlend) return change({ kind: 'update', id: existingBlend.id, op });
       const refused = change({ kind: 'add', entry: { id, enabled: true, op }, index: op.op === 'blend' ? 0 : entries.length });
-      if (!refused && (op.op === 'lengthen' || op.op === 'rise')) setSelectedId(id);
+      if (!refused && hasAmountHandle(op)) setSelectedId(id);
       return refused;
     },
     [selected, entries, change],
@@ -102,7 +102,7 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
   const ctx = useMemo<ToolContext>(() => ({ base, current: committed.pattern, unit, editing, submit, listen }), [base, committed.pattern, unit, editing, submit, listen]);
 
   const step = unit === 'in' ? 25.4 / 16 : 1;
-  const amountOf = (op: AlterationOp | undefined) => (op && (op.op === 'lengthen' || op.op === 'rise') ? op.amount : 0);
+  const amountOf = (op: AlterationOp | undefined) => (op && hasAmountHandle(op) ? op.amount : 0);
   const liveAmount = amountOf(draft?.op ?? selected?.op);
   const overlays = useMemo<CanvasOverlay[]>(
     () => (handle && viewing === null ? [{ kind: 'handle', id: 'amount', piece: handle.piece, at: handlePoint(handle, liveAmount), axis: handle.axis, label: `Amount ${formatLength(liveAmount, unit, { signed: true })}` }] : []),
@@ -112,8 +112,8 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
   const dragFrame = useRef<{ op: AlterationOp; id: string; raf: number } | null>(null);
   const onHandleDrag = useCallback(
     (_id: string, point: Point, phase: 'start' | 'move' | 'end') => {
-      if (!handle || !selected || !dragPrefix || (selected.op.op !== 'lengthen' && selected.op.op !== 'rise')) return;
-      const op = { ...selected.op, amount: amountAt(handle, point, step) };
+      if (!handle || !selected || !dragPrefix || !hasAmountHandle(selected.op)) return;
+      const op: AlterationOp = { ...selected.op, amount: amountAt(handle, point, step) };
       if (phase !== 'end') {
         if (dragFrame.current) {
           dragFrame.current.op = op;
@@ -130,7 +130,7 @@ export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: Works
         if (dragFrame.current) cancelAnimationFrame(dragFrame.current.raf);
         dragFrame.current = null;
         setDraft(null);
-        if (op.amount !== selected.op.amount) change({ kind: 'update', id: selected.id, op });
+        if (op.amount !== amountOf(selected.op)) change({ kind: 'update', id: selected.id, op });
       }
     },
     [handle, selected, dragPrefix, step, change],

@@ -261,7 +261,7 @@ function SlashTool({ ctx }: { ctx: ToolContext }) {
   const op: AlterationOp | undefined = piece && from && hinge && amount !== 0 ? { op: 'slash-spread', piece, from, hinge, amount, move } : undefined;
   return (
     <div className="flex flex-col gap-3">
-      <p className="text-sm text-ink-700">Draw the slash from an edge to a hinge point, then open (+) or close (−) it by an amount at the edge.</p>
+      <p className="text-sm text-ink-700">Draw the slash from an edge to a hinge point, then open (+) or close (−) it by an amount at the edge — typed here, or by dragging the handle at the slash once it is in the list.</p>
       <p className="text-sm text-ink-900">{!from ? 'Slash start: not placed' : !hinge ? `Slash on ${piece}: place the hinge` : `Slash on ${piece}: placed`}</p>
       <LengthField label="Opening at the edge" unit={ctx.unit} valueMm={amount} signed onCommit={setAmount} />
       <Field label="Part that turns">

@@ -1,8 +1,9 @@
 /**
  * Drag handles for amounts: a lengthen/shorten or rise alteration gets a handle on its line that
- * moves along the grain. Pure: positions in the piece's millimetres.
+ * moves along the grain; a slash and spread gets one at the slash's start on the edge, moving
+ * across the slash (toward the part that turns opens it). Pure: positions in the piece's millimetres.
  */
-import { type AlterationOp, type Pattern, pathFromSvg, pieceGrain, type Point, vecDot, vecSub } from '../../../../geometry/index.ts';
+import { type AlterationOp, type Pattern, pathFromSvg, pieceGrain, type Point, vecDot, vecNormalize, vecPerp, vecSub } from '../../../../geometry/index.ts';
 
 export interface AmountHandle {
   piece: string;
@@ -14,8 +15,24 @@ export interface AmountHandle {
   sense: 1 | -1;
 }
 
-/** The handle of a lengthen or rise alteration on `before` (the pattern before that alteration), if its line is there. */
+/** Does this alteration have an amount to drag? */
+export function hasAmountHandle(op: AlterationOp): op is Extract<AlterationOp, { op: 'lengthen' | 'rise' | 'slash-spread' }> & { amount: number } {
+  return op.op === 'lengthen' || op.op === 'rise' || (op.op === 'slash-spread' && op.amount !== undefined);
+}
+
+/** The handle of a lengthen, rise or slash-and-spread alteration on `before` (the pattern before it), if it can be placed. */
 export function amountHandle(before: Pattern, op: AlterationOp): AmountHandle | undefined {
+  if (op.op === 'slash-spread') {
+    const piece = before.pieces.find((p) => p.name === op.piece);
+    const along = vecSub(op.hinge, op.from);
+    if (!piece || op.amount === undefined || Math.hypot(along.x, along.y) < 1e-9) return undefined;
+    let axis = vecPerp(vecNormalize(along));
+    // Point the axis toward the part that turns: the waist side (against the grain) unless the hem side turns.
+    const towardHem = vecDot(axis, pieceGrain(piece)) > 0;
+    const turnsHem = op.move === 'hem';
+    if (towardHem !== turnsHem) axis = { x: -axis.x, y: -axis.y };
+    return { piece: piece.name, origin: op.from, axis, sense: 1 };
+  }
   if (op.op !== 'lengthen' && op.op !== 'rise') return undefined;
   for (const piece of before.pieces) {
     if (op.pieces && !op.pieces.includes(piece.name)) continue;
