@@ -1,4 +1,5 @@
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useCallback } from 'react';
 import { useParams } from 'react-router-dom';
 import { LoadingState } from '../../components/ui/loading-state';
 import { PageHeading } from '../../components/ui/page-heading';
@@ -6,6 +7,7 @@ import { TextLink } from '../../components/ui/text-link';
 import { FormAlert } from '../../components/ui/form-alert';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
+import { makeKeys } from '../../features/makes/query-keys';
 import { PrintPanel } from '../../features/prints/components/print-panel';
 import { useWorkspaceMake } from '../../features/workspace/api/get-make';
 import { workspacePatternQueryOptions } from '../../features/workspace/api/get-pattern';
@@ -18,6 +20,9 @@ export function Component() {
   const make = useWorkspaceMake(id);
   const pattern = useQuery({ ...workspacePatternQueryOptions(make.data?.pattern.id ?? ''), enabled: !!make.data });
   const unit = user?.units ?? 'in';
+  const queryClient = useQueryClient();
+  // The makes list shows each make's alteration count and when it was last saved.
+  const onSaved = useCallback(() => void queryClient.invalidateQueries({ queryKey: makeKeys.all }), [queryClient]);
   const error = make.error ?? pattern.error;
 
   return (
@@ -38,6 +43,7 @@ export function Component() {
           make={make.data}
           pattern={pattern.data}
           unit={unit}
+          onSaved={onSaved}
           printPanel={<PrintPanel makeId={make.data.id} makeName={make.data.name} units={unit} sizes={pattern.data.sizes} blended={make.data.revision.alterations.some((a) => a.op.op === 'blend' && a.enabled !== false)} />}
         />
       )}

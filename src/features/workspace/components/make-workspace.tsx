@@ -42,10 +42,26 @@ const typing = (target: EventTarget | null) => target instanceof HTMLElement && 
  * altered outline bold, the tools, the list of alterations with undo/redo, the measurements and
  * the paired-seam report, the revision history, and (from the route) printing.
  */
-export function MakeWorkspace({ make, pattern, unit, printPanel }: { make: WorkspaceMake; pattern: WorkspacePattern; unit: LengthUnit; printPanel?: ReactNode }) {
+export function MakeWorkspace({
+  make,
+  pattern,
+  unit,
+  printPanel,
+  onSaved: onSavedOutside,
+}: {
+  make: WorkspaceMake;
+  pattern: WorkspacePattern;
+  unit: LengthUnit;
+  printPanel?: ReactNode;
+  /** After each saved revision (the route refreshes what other screens show of the make). */
+  onSaved?: () => void;
+}) {
   const base = pattern.pattern;
   const queryClient = useQueryClient();
-  const onSaved = useCallback(() => void queryClient.invalidateQueries({ queryKey: workspaceKeys.revisions(make.id) }), [queryClient, make.id]);
+  const onSaved = useCallback(() => {
+    void queryClient.invalidateQueries({ queryKey: workspaceKeys.revisions(make.id) });
+    onSavedOutside?.();
+  }, [queryClient, make.id, onSavedOutside]);
   const editor = useMakeEditor({ makeId: make.id, revision: make.latestRevision, alterations: make.revision.alterations, pattern: base, unit, onSaved });
   const { entries } = editor;
 
