@@ -91,6 +91,12 @@ describe('upload', () => {
     const big = await ada.upload('/api/patterns', { name: 'big.svg', content: Buffer.alloc(5 * 1024 * 1024 + 10, 32) });
     expect(big.status).toBe(413);
     expect(big.body.error.code).toBe('payload_too_large');
+    // a file under another field name, or two files: a clear 400, not a crash
+    const wrongField = await ada.agent.post('/api/patterns').set('x-csrf-token', token).attach('upload', Buffer.from(multiSizeSvg()), 'a.svg');
+    expect(wrongField.status).toBe(400);
+    expect(wrongField.body.error.code).toBe('invalid_input');
+    const two = await ada.agent.post('/api/patterns').set('x-csrf-token', token).attach('file', Buffer.from(multiSizeSvg()), 'a.svg').attach('file', Buffer.from(multiSizeSvg()), 'b.svg');
+    expect(two.status).toBe(400);
   });
 
   it('when the upload has no CSRF token or no session, then 403 / 401', async () => {
