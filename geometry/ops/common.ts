@@ -439,3 +439,17 @@ export function segmentCutTimes(s: Segment, lines: readonly { readonly origin: P
   for (let i = 1; i < ts.length; i++) if (ts[i]! - out[out.length - 1]! > PARAM_EPSILON) out.push(ts[i]!);
   return out;
 }
+
+/**
+ * f applied to segmentPoint(s, t) given as coordinates: the arithmetic of vecLerp (lines) and
+ * cubicPoint (cubics) inline, so no point object is made.
+ */
+export function segmentPointThen<T>(s: Segment, t: number, f: (x: number, y: number) => T): T {
+  if (s.kind === 'line') return f(s.from.x + (s.to.x - s.from.x) * t, s.from.y + (s.to.y - s.from.y) * t);
+  const mt = 1 - t;
+  const a = mt * mt * mt;
+  const b = 3 * mt * mt * t;
+  const d = 3 * mt * t * t;
+  const e = t * t * t;
+  return f(a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y);
+}

@@ -29,7 +29,7 @@ import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { type Path, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentMapPoints, segmentSlice, type Segment } from '../path.ts';
 import { type Point, vecAdd, vecDot, vecPerp, vecScale } from '../vec.ts';
-import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes } from './common.ts';
+import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 export const girthOpSchema = z.object({
   op: z.literal('girth'),
@@ -188,8 +188,8 @@ function deformSegment(s: Segment, field: Field): Segment[] {
     // boundaries), so its middle decides; the redraw checks are probed too, in case a root of
     // a tangent touch was lost to round-off (the field is then ~0 there, but it moves).
     const [t0, t1] = [ts[i - 1]!, ts[i]!];
-    let m = pointAt(s, (t0 + t1) / 2, field.activeXY);
-    for (let k = 1; k <= REDRAW_CHECKS && !m; k++) m = pointAt(s, t0 + ((t1 - t0) * k) / (REDRAW_CHECKS + 1), field.activeXY);
+    let m = segmentPointThen(s, (t0 + t1) / 2, field.activeXY);
+    for (let k = 1; k <= REDRAW_CHECKS && !m; k++) m = segmentPointThen(s, t0 + ((t1 - t0) * k) / (REDRAW_CHECKS + 1), field.activeXY);
     moves.push(m);
     any ||= m;
   }
@@ -202,25 +202,11 @@ function deformSegment(s: Segment, field: Field): Segment[] {
       out.push(part);
       continue;
     }
-    const affine = field.affineOn(part, pointAt(s, (t0 + t1) / 2, asPoint));
+    const affine = field.affineOn(part, segmentPointThen(s, (t0 + t1) / 2, asPoint));
     if (affine) out.push(segmentMapPoints(part, affine));
     else out.push(...redrawMapped(s, t0, t1, field.smooth));
   }
   return out;
-}
-
-/**
- * f applied to segmentPoint(s, t) given as coordinates: the arithmetic of vecLerp (lines) and
- * cubicPoint (cubics) inline, so no point object is made.
- */
-function pointAt<T>(s: Segment, t: number, f: (x: number, y: number) => T): T {
-  if (s.kind === 'line') return f(s.from.x + (s.to.x - s.from.x) * t, s.from.y + (s.to.y - s.from.y) * t);
-  const mt = 1 - t;
-  const a = mt * mt * mt;
-  const b = 3 * mt * mt * t;
-  const d = 3 * mt * t * t;
-  const e = t * t * t;
-  return f(a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y);
 }
 
 const asPoint = (x: number, y: number): Point => ({ x, y });

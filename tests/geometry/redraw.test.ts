@@ -26,6 +26,9 @@ import {
   parsePattern,
   pathFromSvg,
   performGirth,
+  performSlashSpread,
+  performBlend,
+  wedgeAngle,
   pieceGrain,
   redrawMapped,
   segmentLength,
@@ -55,23 +58,23 @@ function distanceToPolyline(p: Point, poly: readonly Point[]): number {
  * bucketed in a grid of `reach`-sized cells, so only the edges of the 3 × 3 cells around a point are measured.
  */
 function nearPolyline(poly: readonly Point[], reach: number): (p: Point) => number {
-  const cells = new Map<string, Point[][]>();
+  const cells = new Map<number, Point[][]>();
+  const key = (cx: number, cy: number): number => cx * 1_000_003 + cy;
   for (let i = 1; i < poly.length; i++) {
     const a = poly[i - 1]!;
     const b = poly[i]!;
     for (let cx = Math.floor(Math.min(a.x, b.x) / reach); cx <= Math.floor(Math.max(a.x, b.x) / reach); cx++)
       for (let cy = Math.floor(Math.min(a.y, b.y) / reach); cy <= Math.floor(Math.max(a.y, b.y) / reach); cy++) {
-        const key = `${cx},${cy}`;
-        const list = cells.get(key) ?? [];
+        const list = cells.get(key(cx, cy)) ?? [];
         list.push([a, b]);
-        cells.set(key, list);
+        cells.set(key(cx, cy), list);
       }
   }
   return (p) => {
     let best = Infinity;
     const cx = Math.floor(p.x / reach);
     const cy = Math.floor(p.y / reach);
-    for (let i = -1; i <= 1; i++) for (let j = -1; j <= 1; j++) for (const e of cells.get(`${cx + i},${cy + j}`) ?? []) best = Math.min(best, distanceToPolyline(p, e));
+    for (let i = -1; i <= 1; i++) for (let j = -1; j <= 1; j++) for (const e of cells.get(key(cx + i, cy + j)) ?? []) best = Math.min(best, distanceToPolyline(p, e));
     return best;
   };
 }
@@ -141,7 +144,7 @@ describe('redrawMapped (the image of a curve under a smooth map)', () => {
       ),
       { numRuns: 60 },
     );
-  });
+  }, 120_000);
 
   it('an affine map needs a single cubic per part, through the exactly mapped control points', () => {
     const c: Cubic = [{ x: 0, y: 0 }, { x: 40, y: 90 }, { x: 120, y: -30 }, { x: 200, y: 50 }];
@@ -247,7 +250,75 @@ describe('girth redraw against the exact displaced outline', () => {
           for (const p of redrawn) expect(toImage(p)).toBeLessThanOrEqual(slack + chordError);
         },
       ),
-      { numRuns: 25 },
+      { numRuns: 15 },
     );
-  });
+  }, 120_000);
+});
+
+/**
+ * The wedge map of slash-spread written out from its definition (geometry/README.md,
+ * slash-spread): the moving side turns about the hinge H by θ; over an angular zone `zone` mm
+ * wide at E (at most 30°), starting half of it on the fixed side, the turn grows linearly.
+ */
+function wedgeReference(from: Point, hinge: Point, theta: number, side: 1 | -1, zone: number): (p: Point) => Point {
+  const ray = { x: from.x - hinge.x, y: from.y - hinge.y };
+  const w = Math.min(zone / Math.hypot(ray.x, ray.y), Math.PI / 6);
+  const lo = -w / 2;
+  const hiOld = w / 2 + Math.max(0, -theta);
+  const hiNew = w / 2 + Math.max(0, theta);
+  return (p) => {
+    const v = { x: p.x - hinge.x, y: p.y - hinge.y };
+    if (Math.hypot(v.x, v.y) < 1e-9) return p;
+    const s = side * Math.atan2(ray.x * v.y - ray.y * v.x, ray.x * v.x + ray.y * v.y);
+    const f = s <= lo ? s : s < hiOld ? lo + ((s - lo) * (hiNew - lo)) / (hiOld - lo) : s + theta;
+    const a = side * (f - s);
+    return { x: hinge.x + v.x * Math.cos(a) - v.y * Math.sin(a), y: hinge.y + v.x * Math.sin(a) + v.y * Math.cos(a) };
+  };
+}
+
+describe('slash-spread redraw against the exact wedge map', () => {
+  const base = performBlend(parsePattern(demoPattern()), { op: 'blend', levels: [{ level: 'waist', size: '10' }] }).pattern;
+  const front = base.pieces.find((p) => p.name === 'front')!;
+  const contour = outlineContour(front.outlines[0]!);
+  it('every point of the exactly mapped outline lies within REDRAW_TOLERANCE of the new outline, and back (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 60, max: 140, noNaN: true }), fc.double({ min: -25, max: 25, noNaN: true }), fc.double({ min: 10, max: 80, noNaN: true }), (y, amount, zone) => {
+        // a slash across the front at height y, hinged on the side seam, opened at the centre front
+        const hits = contourLineIntersections(contour, { x: 0, y }, { x: 1, y: 0 }).map((h) => h.point).sort((a, b) => a.x - b.x);
+        const hinge = hits[0]!;
+        const from = hits[hits.length - 1]!;
+        let out: Pattern;
+        try {
+          out = performSlashSpread(base, { op: 'slash-spread', piece: 'front', from, hinge, amount, move: 'waist', trueZone: zone }).pattern;
+        } catch {
+          return; // refused: nothing to compare
+        }
+        const g = pieceGrain(front);
+        const ray = { x: from.x - hinge.x, y: from.y - hinge.y };
+        const side = ray.x * -g.y - ray.y * -g.x >= 0 ? 1 : -1;
+        const map = wedgeReference(from, hinge, wedgeAngle(amount, Math.hypot(ray.x, ray.y)), side, zone);
+        const after = outlineContour(out.pieces.find((p) => p.name === 'front')!.outlines[0]!);
+        const image: Point[] = [];
+        let chordError = 0;
+        for (const seg of contour.segments) {
+          const n = Math.max(8, Math.ceil(segmentLength(seg) / 0.25));
+          for (let i = 0; i < n; i++) {
+            const a = map(segmentPoint(seg, i / n));
+            const b = map(segmentPoint(seg, (i + 1) / n));
+            chordError = Math.max(chordError, distanceToPolyline(map(segmentPoint(seg, (i + 0.5) / n)), [a, b]));
+            image.push(a);
+          }
+        }
+        image.push(image[0]!);
+        const redrawn = contourFlatten(after, 1e-4).map((f) => f.point);
+        redrawn.push(redrawn[0]!);
+        const slack = REDRAW_TOLERANCE + 1e-6 + 1e-9;
+        const toRedrawn = nearPolyline(redrawn, 1);
+        const toImage = nearPolyline(image, 1);
+        for (const p of image) expect(toRedrawn(p)).toBeLessThanOrEqual(slack + 1e-4);
+        for (const p of redrawn) expect(toImage(p)).toBeLessThanOrEqual(slack + chordError);
+      }),
+      { numRuns: 12 },
+    );
+  }, 120_000);
 });
