@@ -446,17 +446,21 @@ export function pathToSvg(path: Path, decimals = 4): string {
 function writePath(path: Path, decimals: number): string {
   const parts: string[] = [];
   for (const c of path) {
-    if (c.segments.length === 0) continue;
-    const first = c.segments[0]!;
-    parts.push(`M${fmt(first.from.x, decimals)} ${fmt(first.from.y, decimals)}`);
-    c.segments.forEach((s, i) => {
-      if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return; // Z draws it
-      const p = (q: Point): string => `${fmt(q.x, decimals)} ${fmt(q.y, decimals)}`;
-      parts.push(s.kind === 'line' ? `L${p(s.to)}` : `C${p(s.c1)} ${p(s.c2)} ${p(s.to)}`);
-    });
+    const segs = c.segments;
+    if (segs.length === 0) continue;
+    parts.push('M' + fmtPoint(segs[0]!.from, decimals));
+    for (let i = 0; i < segs.length; i++) {
+      const s = segs[i]!;
+      if (c.closed && i === segs.length - 1 && s.kind === 'line') continue; // Z draws it
+      parts.push(s.kind === 'line' ? 'L' + fmtPoint(s.to, decimals) : 'C' + fmtPoint(s.c1, decimals) + ' ' + fmtPoint(s.c2, decimals) + ' ' + fmtPoint(s.to, decimals));
+    }
     if (c.closed) parts.push('Z');
   }
   return parts.join(' ');
+}
+
+function fmtPoint(q: Point, decimals: number): string {
+  return fmt(q.x, decimals) + ' ' + fmt(q.y, decimals);
 }
 
 // ------------------------------------------------------- deferred writing (applyOps)
