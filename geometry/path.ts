@@ -20,6 +20,7 @@ import {
   cubicTimeAtLength,
   quadraticToCubic,
 } from './bezier.ts';
+import { orderByKey } from './sweep.ts';
 import { CLOSE_GAP, FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
 import {
   type Affine,
@@ -664,6 +665,28 @@ export function contourFlattenShared(c: Contour, tolerance = FLATNESS): readonly
 }
 
 /**
+ * The points of contourFlattenShared(c, tolerance) in order — the very point objects, taken from
+ * the per-cubic memo and the segment ends — without FlatPoint objects and without a memo for
+ * the contour (for callers that only need the points once).
+ */
+export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
+  const out: Point[] = [];
+  const segs = c.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (i === 0) out.push(s.from);
+    if (s.kind === 'line') {
+      out.push(s.to);
+      continue;
+    }
+    const points = cubicFlattening(s, tolerance).points;
+    for (let k = 1; k < points.length; k++) out.push(points[k]!);
+  }
+  if (c.closed && out.length > 1) out.pop();
+  return out;
+}
+
+/**
  * Flattenings by contour object and tolerance. Contours are read-only values and flattening is
  * a pure function of them, so sharing the result changes nothing; it saves flattening the same
  * outline again in the next check or operation (outlines an operation leaves alone are the
@@ -891,16 +914,16 @@ function mayCross(c: Contour, tolerance: number): boolean {
   const maxX = new Float64Array(edgeCount);
   const minY = new Float64Array(edgeCount);
   const maxY = new Float64Array(edgeCount);
-  const order = new Int32Array(edgeCount);
   for (let i = 0; i < edgeCount; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     minX[i] = Math.min(xs[i]!, xs[j]!);
     maxX[i] = Math.max(xs[i]!, xs[j]!);
     minY[i] = Math.min(ys[i]!, ys[j]!);
     maxY[i] = Math.max(ys[i]!, ys[j]!);
-    order[i] = i;
   }
-  order.sort((p, q) => minX[p]! - minX[q]!);
+  // Any order by minX tests the same pairs: a pair is tested when the later of the two arrives
+  // and the earlier still reaches it, whichever of two equal keys comes first.
+  const order = orderByKey(minX, edgeCount);
   const active = new Int32Array(edgeCount);
   let count = 0;
   for (const e of order) {

@@ -5,7 +5,7 @@
 import {
   type Contour,
   type Path,
-  contourFlattenShared,
+  contourFlatPoints,
   contourSelfCrossings,
   pathFromSvg,
   pathToSvg,
@@ -81,8 +81,8 @@ export function pieceGrain(piece: Piece): Point {
 export function projectionRange(contour: Contour, direction: Point, origin: Point = { x: 0, y: 0 }): { min: number; max: number } {
   let min = Infinity;
   let max = -Infinity;
-  for (const f of contourFlattenShared(contour, 0.05)) {
-    const v = vecDot(vecSub(f.point, origin), direction);
+  for (const p of contourFlatPoints(contour, 0.05)) {
+    const v = vecDot(vecSub(p, origin), direction);
     min = Math.min(min, v);
     max = Math.max(max, v);
   }

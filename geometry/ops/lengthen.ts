@@ -19,7 +19,7 @@
  */
 import { z } from 'zod';
 import { type Pattern, type Piece, outlineContour } from '../model.ts';
-import { contourFlattenShared, pathFromSvg } from '../path.ts';
+import { contourFlatPoints, pathFromSvg } from '../path.ts';
 import { MIN_LINE_GRAIN_ANGLE, TRUE_ZONE } from '../tolerance.ts';
 import { type Affine, type Point, AFFINE_IDENTITY, affineTranslate, vecAdd, vecCross, vecNormalize, vecScale, vecSub } from '../vec.ts';
 import {
@@ -122,8 +122,8 @@ function spreadPiece(piece: Piece, lineName: string, amount: number, zone: numbe
     // extent of the outline along g measured from the line (in the oblique β coordinate)
     let min = Infinity;
     let max = -Infinity;
-    for (const f of contourFlattenShared(contour, 0.05)) {
-      const b = map.coordinate(f.point);
+    for (const p of contourFlatPoints(contour, 0.05)) {
+      const b = map.coordinate(p);
       min = Math.min(min, b);
       max = Math.max(max, b);
     }

@@ -21,7 +21,7 @@
 import { z } from 'zod';
 import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
-import { type Path, segmentSlice, segmentTransform, type Segment, contourFlattenShared } from '../path.ts';
+import { type Path, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
 import { REDRAW_CHECKS, TRUE_ZONE } from '../tolerance.ts';
 import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
@@ -188,12 +188,12 @@ export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpRe
     ...target,
     outlines: target.outlines.map((o) => {
       // nothing of the piece may lie behind the hinge on the moving side's far boundary
-      for (const f of contourFlattenShared(outlineContour(o), 0.1)) {
-        const d = vecDistance(f.point, op.hinge);
+      for (const p of contourFlatPoints(outlineContour(o), 0.1)) {
+        const d = vecDistance(p, op.hinge);
         if (d < 1) continue;
-        const s = side * vecAngleBetween(ray, vecSub(f.point, op.hinge));
+        const s = side * vecAngleBetween(ray, vecSub(p, op.hinge));
         if (s + theta > Math.PI - 1e-9 || (theta < 0 && s > Math.PI + theta))
-          throw new AlterationError('fold', `slash-spread on "${target.name}" size "${o.size}": part of the piece lies behind the hinge near (${f.point.x.toFixed(1)}, ${f.point.y.toFixed(1)}); the wedge would fold the outline — put the hinge on the far edge`, f.point);
+          throw new AlterationError('fold', `slash-spread on "${target.name}" size "${o.size}": part of the piece lies behind the hinge near (${p.x.toFixed(1)}, ${p.y.toFixed(1)}); the wedge would fold the outline — put the hinge on the far edge`, p);
       }
       const mapped = mapOutline(o, mapPath, m.map);
       assertSimple(outlineContour(mapped), `slash-spread on "${target.name}" size "${o.size}"`);
