@@ -19,6 +19,7 @@ import {
   cubicTangent,
   cubicTimeAtLength,
   quadraticToCubic,
+  solveQuadratic,
 } from './bezier.ts';
 import { orderByKey } from './sweep.ts';
 import { CLOSE_GAP, FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
@@ -629,6 +630,30 @@ export function contourBounds(c: Contour): { minX: number; minY: number; maxX: n
     maxY = Math.max(maxY, b.maxY);
   }
   return { minX, minY, maxX, maxY };
+}
+
+/**
+ * The points of a contour where its projection on `direction` can be greatest or least: every
+ * segment's ends and, on cubics, the points where the derivative of the projection vanishes
+ * (the roots in (0, 1) of a quadratic). The exact extent of the contour along the direction is
+ * the range of the projection over these points — no flattening, no tolerance.
+ */
+export function contourExtremePoints(c: Contour, direction: Point): Point[] {
+  const out: Point[] = [];
+  const segs = c.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (i === 0) out.push(s.from);
+    if (s.kind === 'cubic') {
+      // d/dt (B(t)·u) = 3[(1−t)²a0 + 2(1−t)t·a1 + t²a2], a_k = (P_k+1 − P_k)·u
+      const a0 = (s.c1.x - s.from.x) * direction.x + (s.c1.y - s.from.y) * direction.y;
+      const a1 = (s.c2.x - s.c1.x) * direction.x + (s.c2.y - s.c1.y) * direction.y;
+      const a2 = (s.to.x - s.c2.x) * direction.x + (s.to.y - s.c2.y) * direction.y;
+      for (const t of solveQuadratic(a0 - 2 * a1 + a2, 2 * (a1 - a0), a0)) if (t > 0 && t < 1) out.push(cubicPoint([s.from, s.c1, s.c2, s.to], t));
+    }
+    out.push(s.to);
+  }
+  return out;
 }
 
 /** A flattened contour: polyline vertices with the segment and parameter each came from. */
