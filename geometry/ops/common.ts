@@ -135,7 +135,13 @@ function cutsOf(m: BandMap, s: Segment): number[][] {
 function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
   const ts: number[] = [];
   for (const c of cuts) ts.push(...c);
-  return segmentSplitAt(s, ts).map((part) => segmentTransform(part, m.maps[bandIndex(m, m.coordinate(segmentPoint(part, 0.5)))]!));
+  // A part in an identity band is handed back as it is: the identity moves no number (it only
+  // turns −0 into 0, which prints and reads back the same), and an unsplit segment that stays
+  // the very same object keeps its flattenings for the next check or operation.
+  return segmentSplitAt(s, ts).map((part) => {
+    const map = m.maps[bandIndex(m, m.coordinate(segmentPoint(part, 0.5)))]!;
+    return map === AFFINE_IDENTITY ? part : segmentTransform(part, map);
+  });
 }
 
 /** Map a path; returns the very same path when every part lies in an identity band (nothing moves). */
