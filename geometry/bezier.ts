@@ -393,35 +393,52 @@ export function cubicBounds(c: Cubic): { minX: number; minY: number; maxX: numbe
  */
 export function cubicNearestTime(c: Cubic, p: Point): number {
   let best = 0;
-  let bestD = Infinity;
+  let bestD2 = Infinity;
   const n = 32;
   const [p0, p1, p2, p3] = c;
   for (let i = 0; i <= n; i++) {
     const t = i / n;
-    // vecDistance(cubicPoint(c, t), p) with cubicPoint's arithmetic inline
+    // the squared distance from cubicPoint(c, t) to p, cubicPoint's arithmetic inline (the
+    // nearest sample is the same by squares; Math.hypot is only taken for the winner)
     const mt = 1 - t;
     const a = mt * mt * mt;
     const b = 3 * mt * mt * t;
     const e = 3 * mt * t * t;
     const f = t * t * t;
-    const d = Math.hypot(a * p0.x + b * p1.x + e * p2.x + f * p3.x - p.x, a * p0.y + b * p1.y + e * p2.y + f * p3.y - p.y);
-    if (d < bestD) {
-      bestD = d;
+    const dx = a * p0.x + b * p1.x + e * p2.x + f * p3.x - p.x;
+    const dy = a * p0.y + b * p1.y + e * p2.y + f * p3.y - p.y;
+    const d2 = dx * dx + dy * dy;
+    if (d2 < bestD2) {
+      bestD2 = d2;
       best = t;
     }
   }
+  const bestD = vecDistance(cubicPoint(c, best), p);
+  // Newton on (B(t) − p)·B′(t) = 0, with cubicPoint, cubicDerivative and vecDot inline (same arithmetic)
+  const ax2 = c[2].x - 2 * c[1].x + c[0].x;
+  const ay2 = c[2].y - 2 * c[1].y + c[0].y;
+  const bx2 = c[3].x - 2 * c[2].x + c[1].x;
+  const by2 = c[3].y - 2 * c[2].y + c[1].y;
   let t = best;
   for (let i = 0; i < 20; i++) {
-    const q = cubicPoint(c, t);
-    const d1 = cubicDerivative(c, t);
     const mt = 1 - t;
-    const d2 = {
-      x: 6 * mt * (c[2].x - 2 * c[1].x + c[0].x) + 6 * t * (c[3].x - 2 * c[2].x + c[1].x),
-      y: 6 * mt * (c[2].y - 2 * c[1].y + c[0].y) + 6 * t * (c[3].y - 2 * c[2].y + c[1].y),
-    };
-    const diff = vecSub(q, p);
-    const num = vecDot(diff, d1);
-    const den = vecDot(d1, d1) + vecDot(diff, d2);
+    const a = mt * mt * mt;
+    const b = 3 * mt * mt * t;
+    const d = 3 * mt * t * t;
+    const e = t * t * t;
+    const qx = a * p0.x + b * p1.x + d * p2.x + e * p3.x;
+    const qy = a * p0.y + b * p1.y + d * p2.y + e * p3.y;
+    const da = 3 * mt * mt;
+    const db = 6 * mt * t;
+    const dd = 3 * t * t;
+    const d1x = da * (p1.x - p0.x) + db * (p2.x - p1.x) + dd * (p3.x - p2.x);
+    const d1y = da * (p1.y - p0.y) + db * (p2.y - p1.y) + dd * (p3.y - p2.y);
+    const d2x = 6 * mt * ax2 + 6 * t * bx2;
+    const d2y = 6 * mt * ay2 + 6 * t * by2;
+    const diffx = qx - p.x;
+    const diffy = qy - p.y;
+    const num = diffx * d1x + diffy * d1y;
+    const den = d1x * d1x + d1y * d1y + (diffx * d2x + diffy * d2y);
     if (Math.abs(den) < 1e-18) break;
     const next = Math.min(1, Math.max(0, t - num / den));
     if (Math.abs(next - t) < PARAM_EPSILON) {

@@ -19,7 +19,9 @@ import {
   cubicTangent,
   cubicTimeAtLength,
   quadraticToCubic,
+  solveQuadratic,
 } from './bezier.ts';
+import { orderByKey } from './sweep.ts';
 import { CLOSE_GAP, FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
 import {
   type Affine,
@@ -446,17 +448,21 @@ export function pathToSvg(path: Path, decimals = 4): string {
 function writePath(path: Path, decimals: number): string {
   const parts: string[] = [];
   for (const c of path) {
-    if (c.segments.length === 0) continue;
-    const first = c.segments[0]!;
-    parts.push(`M${fmt(first.from.x, decimals)} ${fmt(first.from.y, decimals)}`);
-    c.segments.forEach((s, i) => {
-      if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return; // Z draws it
-      const p = (q: Point): string => `${fmt(q.x, decimals)} ${fmt(q.y, decimals)}`;
-      parts.push(s.kind === 'line' ? `L${p(s.to)}` : `C${p(s.c1)} ${p(s.c2)} ${p(s.to)}`);
-    });
+    const segs = c.segments;
+    if (segs.length === 0) continue;
+    parts.push('M' + fmtPoint(segs[0]!.from, decimals));
+    for (let i = 0; i < segs.length; i++) {
+      const s = segs[i]!;
+      if (c.closed && i === segs.length - 1 && s.kind === 'line') continue; // Z draws it
+      parts.push(s.kind === 'line' ? 'L' + fmtPoint(s.to, decimals) : 'C' + fmtPoint(s.c1, decimals) + ' ' + fmtPoint(s.c2, decimals) + ' ' + fmtPoint(s.to, decimals));
+    }
     if (c.closed) parts.push('Z');
   }
   return parts.join(' ');
+}
+
+function fmtPoint(q: Point, decimals: number): string {
+  return fmt(q.x, decimals) + ' ' + fmt(q.y, decimals);
 }
 
 // ------------------------------------------------------- deferred writing (applyOps)
@@ -626,6 +632,30 @@ export function contourBounds(c: Contour): { minX: number; minY: number; maxX: n
   return { minX, minY, maxX, maxY };
 }
 
+/**
+ * The points of a contour where its projection on `direction` can be greatest or least: every
+ * segment's ends and, on cubics, the points where the derivative of the projection vanishes
+ * (the roots in (0, 1) of a quadratic). The exact extent of the contour along the direction is
+ * the range of the projection over these points — no flattening, no tolerance.
+ */
+export function contourExtremePoints(c: Contour, direction: Point): Point[] {
+  const out: Point[] = [];
+  const segs = c.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (i === 0) out.push(s.from);
+    if (s.kind === 'cubic') {
+      // d/dt (B(t)·u) = 3[(1−t)²a0 + 2(1−t)t·a1 + t²a2], a_k = (P_k+1 − P_k)·u
+      const a0 = (s.c1.x - s.from.x) * direction.x + (s.c1.y - s.from.y) * direction.y;
+      const a1 = (s.c2.x - s.c1.x) * direction.x + (s.c2.y - s.c1.y) * direction.y;
+      const a2 = (s.to.x - s.c2.x) * direction.x + (s.to.y - s.c2.y) * direction.y;
+      for (const t of solveQuadratic(a0 - 2 * a1 + a2, 2 * (a1 - a0), a0)) if (t > 0 && t < 1) out.push(cubicPoint([s.from, s.c1, s.c2, s.to], t));
+    }
+    out.push(s.to);
+  }
+  return out;
+}
+
 /** A flattened contour: polyline vertices with the segment and parameter each came from. */
 export interface FlatPoint {
   readonly point: Point;
@@ -657,6 +687,28 @@ export function contourFlattenShared(c: Contour, tolerance = FLATNESS): readonly
     byTolerance.set(tolerance, flat);
   }
   return flat;
+}
+
+/**
+ * The points of contourFlattenShared(c, tolerance) in order — the very point objects, taken from
+ * the per-cubic memo and the segment ends — without FlatPoint objects and without a memo for
+ * the contour (for callers that only need the points once).
+ */
+export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
+  const out: Point[] = [];
+  const segs = c.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (i === 0) out.push(s.from);
+    if (s.kind === 'line') {
+      out.push(s.to);
+      continue;
+    }
+    const points = cubicFlattening(s, tolerance).points;
+    for (let k = 1; k < points.length; k++) out.push(points[k]!);
+  }
+  if (c.closed && out.length > 1) out.pop();
+  return out;
 }
 
 /**
@@ -763,15 +815,16 @@ function segmentsIntersect(a: Point, b: Point, c: Point, d: Point): Point | null
  * sweep first asks whether there is anything to list).
  */
 export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCrossing[] {
+  // Nearly every outline checked is simple: a lean sweep on typed arrays first says whether any
+  // pair meets (every pair the listing sweep below tests, both ways round), on the vertices of
+  // the flattening taken straight from the per-cubic memo (no FlatPoint objects); only then list them.
+  if (!mayCross(c, tolerance)) return [];
   const raw = contourFlattenShared(c, tolerance);
   const flat = raw.filter((f, i) => i === 0 || vecDistance(f.point, raw[i - 1]!.point) > POINT_EPSILON);
   if (c.closed && flat.length > 1 && vecDistance(flat[0]!.point, flat[flat.length - 1]!.point) <= POINT_EPSILON) flat.pop();
   const n = flat.length;
   const edgeCount = c.closed ? n : n - 1;
   if (edgeCount < 3) return [];
-  // Nearly every outline checked is simple: a lean sweep on typed arrays first says whether any
-  // pair meets (every pair the listing sweep below tests, both ways round); only then list them.
-  if (!mayCross(flat, c.closed, edgeCount)) return [];
   const edges = Array.from({ length: edgeCount }, (_, i) => {
     const a = flat[i]!;
     const b = flat[(i + 1) % n]!;
@@ -795,34 +848,109 @@ export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCros
 }
 
 /**
- * True when two non-neighbouring edges of the polyline meet by segmentsIntersect. The sweep
- * over x of contourSelfCrossings with the same pruning, on typed arrays and collecting nothing.
+ * The vertices contourSelfCrossings works on, as coordinates: the flattening of flattenContour
+ * (the same per-cubic memo, the same points), without vertices within POINT_EPSILON of the
+ * vertex before them (and, closed, of the first), as its filter drops them.
  */
-function mayCross(flat: readonly FlatPoint[], closed: boolean, edgeCount: number): boolean {
-  const n = flat.length;
-  const xs = new Float64Array(n);
-  const ys = new Float64Array(n);
-  for (let k = 0; k < n; k++) {
-    xs[k] = flat[k]!.point.x;
-    ys[k] = flat[k]!.point.y;
+function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Float64Array; n: number } {
+  let total = 1;
+  for (const s of c.segments) total += s.kind === 'line' ? 1 : cubicFlattening(s, tolerance).ts.length - 1;
+  const xs = new Float64Array(total);
+  const ys = new Float64Array(total);
+  // raw vertices in order, as flattenContour lists them
+  let m = 0;
+  const segs = c.segments;
+  if (segs.length > 0) {
+    xs[0] = segs[0]!.from.x;
+    ys[0] = segs[0]!.from.y;
+    m = 1;
   }
+  for (const s of segs) {
+    if (s.kind === 'line') {
+      xs[m] = s.to.x;
+      ys[m] = s.to.y;
+      m++;
+      continue;
+    }
+    const pts = cubicFlattening(s, tolerance).points;
+    for (let k = 1; k < pts.length; k++) {
+      xs[m] = pts[k]!.x;
+      ys[m] = pts[k]!.y;
+      m++;
+    }
+  }
+  if (c.closed && m > 1) m--;
+  // the filter of contourSelfCrossings: each raw vertex against the raw vertex before it
+  let n = 0;
+  let px = 0;
+  let py = 0;
+  for (let k = 0; k < m; k++) {
+    const x = xs[k]!;
+    const y = ys[k]!;
+    if (k === 0 || Math.hypot(x - px, y - py) > POINT_EPSILON) {
+      xs[n] = x;
+      ys[n] = y;
+      n++;
+    }
+    px = x;
+    py = y;
+  }
+  if (c.closed && n > 1 && Math.hypot(xs[0]! - xs[n - 1]!, ys[0]! - ys[n - 1]!) <= POINT_EPSILON) n--;
+  return { xs, ys, n };
+}
+
+/**
+ * segmentsIntersect(a, b, c, d) !== null on coordinates, with the same arithmetic in the same
+ * order (vecSub, vecCross, vecDot inline), so it decides exactly as segmentsIntersect does.
+ */
+function segmentsMeet(ax: number, ay: number, bx: number, by: number, cx: number, cy: number, dx: number, dy: number): boolean {
+  const rx = bx - ax;
+  const ry = by - ay;
+  const sx = dx - cx;
+  const sy = dy - cy;
+  const den = rx * sy - ry * sx;
+  const qx = cx - ax;
+  const qy = cy - ay;
+  if (Math.abs(den) < 1e-15) {
+    if (Math.abs(qx * ry - qy * rx) > 1e-9 * Math.max(1, Math.hypot(rx, ry))) return false;
+    const rr = rx * rx + ry * ry;
+    if (rr === 0) return false;
+    const t0 = (qx * rx + qy * ry) / rr;
+    const t1 = t0 + (sx * rx + sy * ry) / rr;
+    return Math.max(0, Math.min(t0, t1)) <= Math.min(1, Math.max(t0, t1));
+  }
+  const t = (qx * sy - qy * sx) / den;
+  const u = (qx * ry - qy * rx) / den;
+  const e = 1e-12;
+  return t >= -e && t <= 1 + e && u >= -e && u <= 1 + e;
+}
+
+/**
+ * True when two non-neighbouring edges of the flattened contour meet by segmentsIntersect. The
+ * sweep over x of contourSelfCrossings with the same pruning, on typed arrays and collecting
+ * nothing.
+ */
+function mayCross(c: Contour, tolerance: number): boolean {
+  const { xs, ys, n } = flatVertices(c, tolerance);
+  const closed = c.closed;
+  const edgeCount = closed ? n : n - 1;
+  if (edgeCount < 3) return false;
   const minX = new Float64Array(edgeCount);
   const maxX = new Float64Array(edgeCount);
   const minY = new Float64Array(edgeCount);
   const maxY = new Float64Array(edgeCount);
-  const order = new Int32Array(edgeCount);
   for (let i = 0; i < edgeCount; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     minX[i] = Math.min(xs[i]!, xs[j]!);
     maxX[i] = Math.max(xs[i]!, xs[j]!);
     minY[i] = Math.min(ys[i]!, ys[j]!);
     maxY[i] = Math.max(ys[i]!, ys[j]!);
-    order[i] = i;
   }
-  order.sort((p, q) => minX[p]! - minX[q]!);
+  // Any order by minX tests the same pairs: a pair is tested when the later of the two arrives
+  // and the earlier still reaches it, whichever of two equal keys comes first.
+  const order = orderByKey(minX, edgeCount);
   const active = new Int32Array(edgeCount);
   let count = 0;
-  const at = (k: number): Point => flat[k]!.point;
   for (const e of order) {
     const left = minX[e]! - 1e-12;
     let kept = 0;
@@ -831,16 +959,18 @@ function mayCross(flat: readonly FlatPoint[], closed: boolean, edgeCount: number
       if (!(maxX[o]! < left)) active[kept++] = o;
     }
     count = kept;
+    const e1 = e + 1 === n ? 0 : e + 1;
     for (let j = 0; j < count; j++) {
       const o = active[j]!;
       const gap = Math.abs(o - e);
       if (gap <= 1 || (closed && gap === edgeCount - 1)) continue;
       if (maxY[o]! < minY[e]! || maxY[e]! < minY[o]!) continue;
-      const oa = at(o);
-      const ob = at(o + 1 === n ? 0 : o + 1);
-      const ea = at(e);
-      const eb = at(e + 1 === n ? 0 : e + 1);
-      if (segmentsIntersect(oa, ob, ea, eb) || segmentsIntersect(ea, eb, oa, ob)) return true;
+      const o1 = o + 1 === n ? 0 : o + 1;
+      if (
+        segmentsMeet(xs[o]!, ys[o]!, xs[o1]!, ys[o1]!, xs[e]!, ys[e]!, xs[e1]!, ys[e1]!) ||
+        segmentsMeet(xs[e]!, ys[e]!, xs[e1]!, ys[e1]!, xs[o]!, ys[o]!, xs[o1]!, ys[o1]!)
+      )
+        return true;
     }
     active[count++] = e;
   }

@@ -90,6 +90,26 @@ export const BLEND_SAMPLE_SPACING = 4;
 export const SMOOTH_MERGE_TOLERANCE = 0.002;
 
 /**
+ * How far (mm) a curve redrawn under a smooth but non-affine map (girth's displacement field,
+ * the truing zone of slash-spread) may lie from the exact image of the original curve,
+ * measured between points of the same curve parameter (which bounds the distance between the
+ * two curves either way). Reason: a fifth of FLATNESS, like SMOOTH_MERGE_TOLERANCE, so the
+ * redraw is invisible next to flattening. Checked at REDRAW_CHECKS evenly spaced parameters
+ * inside each cubic (see redrawMapped in ops/common.ts); tests compare against thousands of
+ * points of the exact image.
+ */
+export const REDRAW_TOLERANCE = 0.002;
+
+/**
+ * Interior parameters at which each redrawn cubic is compared with the exact image (see
+ * REDRAW_TOLERANCE). Reason: the error of a Hermite cubic with the exact end derivatives is a
+ * smooth bump vanishing to second order at both ends; 15 checks sample it at 1/16 steps, so
+ * its largest value between two checks exceeds the largest checked value by far less than the
+ * tolerance (the tests measure it).
+ */
+export const REDRAW_CHECKS = 15;
+
+/**
  * The smallest angle a lengthen or rise line may make with the grain line (radians, 30°).
  * Reason: moving a part "along the grain" across a line nearly parallel to the grain would
  * shear the piece instead of lengthening it; real lengthen lines are square to the grain.

@@ -23,7 +23,11 @@ export const alterationListSchema = z.object({ ops: z.array(alterationOpSchema).
 
 /** Perform one operation (already validated or not: it is parsed here). */
 export function performOp(pattern: Pattern, input: AlterationOp): OpResult {
-  const op = alterationOpSchema.parse(input);
+  return performParsed(pattern, alterationOpSchema.parse(input));
+}
+
+/** performOp for an operation the schema has already parsed (replay parses each one once). */
+function performParsed(pattern: Pattern, op: z.output<typeof alterationOpSchema>): OpResult {
   switch (op.op) {
     case 'lengthen':
       return performLengthen(pattern, op);
@@ -109,7 +113,7 @@ function replay(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; 
       throw new AlterationError('bad-amount', `operation ${index + 1} (${kind}): ${issue.path.join('.') || 'op'}: ${issue.message}`);
     }
     try {
-      const r = performOp(current, parsed.data);
+      const r = performParsed(current, parsed.data);
       current = r.pattern;
       for (const c of r.cautions) cautions.push({ ...c, op: index });
     } catch (error) {

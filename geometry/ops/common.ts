@@ -5,7 +5,7 @@
 import {
   type Contour,
   type Path,
-  contourFlattenShared,
+  contourFlatPoints,
   contourSelfCrossings,
   pathFromSvg,
   pathToSvg,
@@ -16,7 +16,7 @@ import {
   lineSegment,
   type Segment,
 } from '../path.ts';
-import { SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
+import { PARAM_EPSILON, REDRAW_CHECKS, REDRAW_TOLERANCE, SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
 import { type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, outlineContour, orderedOutlines } from '../model.ts';
 import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecNormalize, vecSub } from '../vec.ts';
 
@@ -81,8 +81,8 @@ export function pieceGrain(piece: Piece): Point {
 export function projectionRange(contour: Contour, direction: Point, origin: Point = { x: 0, y: 0 }): { min: number; max: number } {
   let min = Infinity;
   let max = -Infinity;
-  for (const f of contourFlattenShared(contour, 0.05)) {
-    const v = vecDot(vecSub(f.point, origin), direction);
+  for (const p of contourFlatPoints(contour, 0.05)) {
+    const v = vecDot(vecSub(p, origin), direction);
     min = Math.min(min, v);
     max = Math.max(max, v);
   }
@@ -135,7 +135,13 @@ function cutsOf(m: BandMap, s: Segment): number[][] {
 function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
   const ts: number[] = [];
   for (const c of cuts) ts.push(...c);
-  return segmentSplitAt(s, ts).map((part) => segmentTransform(part, m.maps[bandIndex(m, m.coordinate(segmentPoint(part, 0.5)))]!));
+  // A part in an identity band is handed back as it is: the identity moves no number (it only
+  // turns −0 into 0, which prints and reads back the same), and an unsplit segment that stays
+  // the very same object keeps its flattenings for the next check or operation.
+  return segmentSplitAt(s, ts).map((part) => {
+    const map = m.maps[bandIndex(m, m.coordinate(segmentPoint(part, 0.5)))]!;
+    return map === AFFINE_IDENTITY ? part : segmentTransform(part, map);
+  });
 }
 
 /** Map a path; returns the very same path when every part lies in an identity band (nothing moves). */
@@ -311,3 +317,145 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
 /** The most points one merged cubic may span in smoothThrough. */
 const MERGE_MAX_POINTS = 256;
 
+
+/**
+ * A smooth map of the plane given with its derivative: it writes the image of (x, y) to
+ * out[0], out[1] and its Jacobian to out[2..5] (∂x′/∂x, ∂x′/∂y, ∂y′/∂x, ∂y′/∂y).
+ */
+export type SmoothPlaneMap = (x: number, y: number, out: Float64Array) => void;
+
+/**
+ * The image of the part t0..t1 of a segment under a smooth map, as cubics that lie within
+ * `tolerance` of the exact image, measured between points of the same parameter at
+ * REDRAW_CHECKS evenly spaced parameters inside each cubic (REDRAW_TOLERANCE). Each cubic is
+ * the Hermite cubic through the exact images of its ends with the exact end derivatives
+ * (J·P′, chain rule), so neighbouring cubics join with the same tangent; a part that fails the
+ * checks is halved in parameter (at most MAX_REDRAW_DEPTH times). Where the map is smooth the
+ * error of a Hermite cubic falls as the fourth power of its span, so a few cubics do.
+ */
+export function redrawMapped(s: Segment, t0: number, t1: number, map: SmoothPlaneMap, tolerance = REDRAW_TOLERANCE): Segment[] {
+  const out: Segment[] = [];
+  const a = mappedAt(s, t0, map);
+  const b = mappedAt(s, t1, map);
+  fitSpan(s, t0, t1, a, b, map, tolerance * tolerance, 0, out);
+  return out;
+}
+
+/** Halvings of a redrawn part before a cubic is taken as it is (a span of 2^-24 of a segment). */
+const MAX_REDRAW_DEPTH = 24;
+
+interface MappedEnd {
+  readonly point: Point;
+  /** derivative of the image by the segment's parameter */
+  readonly dx: number;
+  readonly dy: number;
+}
+
+const MAP_OUT = new Float64Array(6);
+
+/** The segment's point and derivative at t (cubicPoint/cubicDerivative arithmetic), mapped. */
+function mappedAt(s: Segment, t: number, map: SmoothPlaneMap): MappedEnd {
+  let x: number;
+  let y: number;
+  let vx: number;
+  let vy: number;
+  if (s.kind === 'line') {
+    vx = s.to.x - s.from.x;
+    vy = s.to.y - s.from.y;
+    x = s.from.x + vx * t;
+    y = s.from.y + vy * t;
+  } else {
+    const mt = 1 - t;
+    const a = mt * mt * mt;
+    const b = 3 * mt * mt * t;
+    const d = 3 * mt * t * t;
+    const e = t * t * t;
+    x = a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x;
+    y = a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y;
+    const da = 3 * mt * mt;
+    const db = 6 * mt * t;
+    const dd = 3 * t * t;
+    vx = da * (s.c1.x - s.from.x) + db * (s.c2.x - s.c1.x) + dd * (s.to.x - s.c2.x);
+    vy = da * (s.c1.y - s.from.y) + db * (s.c2.y - s.c1.y) + dd * (s.to.y - s.c2.y);
+  }
+  map(x, y, MAP_OUT);
+  return { point: { x: MAP_OUT[0]!, y: MAP_OUT[1]! }, dx: MAP_OUT[2]! * vx + MAP_OUT[3]! * vy, dy: MAP_OUT[4]! * vx + MAP_OUT[5]! * vy };
+}
+
+function fitSpan(s: Segment, ta: number, tb: number, a: MappedEnd, b: MappedEnd, map: SmoothPlaneMap, tol2: number, depth: number, out: Segment[]): void {
+  const h = tb - ta;
+  const p0 = a.point;
+  const p3 = b.point;
+  const c1x = p0.x + (a.dx * h) / 3;
+  const c1y = p0.y + (a.dy * h) / 3;
+  const c2x = p3.x - (b.dx * h) / 3;
+  const c2y = p3.y - (b.dy * h) / 3;
+  let fits = true;
+  if (depth < MAX_REDRAW_DEPTH)
+    for (let k = 1; k <= REDRAW_CHECKS && fits; k++) {
+      const u = k / (REDRAW_CHECKS + 1);
+      const t = ta + u * h;
+      // the exact image at t
+      let x: number;
+      let y: number;
+      if (s.kind === 'line') {
+        x = s.from.x + (s.to.x - s.from.x) * t;
+        y = s.from.y + (s.to.y - s.from.y) * t;
+      } else {
+        const mt = 1 - t;
+        const ca = mt * mt * mt;
+        const cb = 3 * mt * mt * t;
+        const cd = 3 * mt * t * t;
+        const ce = t * t * t;
+        x = ca * s.from.x + cb * s.c1.x + cd * s.c2.x + ce * s.to.x;
+        y = ca * s.from.y + cb * s.c1.y + cd * s.c2.y + ce * s.to.y;
+      }
+      map(x, y, MAP_OUT);
+      // the Hermite cubic at u
+      const mu = 1 - u;
+      const ha = mu * mu * mu;
+      const hb = 3 * mu * mu * u;
+      const hc = 3 * mu * u * u;
+      const he = u * u * u;
+      const dx = ha * p0.x + hb * c1x + hc * c2x + he * p3.x - MAP_OUT[0]!;
+      const dy = ha * p0.y + hb * c1y + hc * c2y + he * p3.y - MAP_OUT[1]!;
+      fits = dx * dx + dy * dy <= tol2;
+    }
+  if (fits) {
+    out.push({ kind: 'cubic', from: p0, c1: { x: c1x, y: c1y }, c2: { x: c2x, y: c2y }, to: p3 });
+    return;
+  }
+  const tm = ta + h / 2;
+  const m = mappedAt(s, tm, map);
+  fitSpan(s, ta, tm, a, m, map, tol2, depth + 1, out);
+  fitSpan(s, tm, tb, m, b, map, tol2, depth + 1, out);
+}
+
+/**
+ * Parameters in (0, 1) where a segment meets any of the given infinite lines, sorted, without
+ * values within PARAM_EPSILON of each other or of the ends (the places where a piecewise
+ * defined map changes its formula).
+ */
+export function segmentCutTimes(s: Segment, lines: readonly { readonly origin: Point; readonly direction: Point }[]): number[] {
+  const ts: number[] = [];
+  for (const l of lines) for (const t of segmentLineIntersections(s, l.origin, l.direction)) if (t > PARAM_EPSILON && t < 1 - PARAM_EPSILON) ts.push(t);
+  if (ts.length < 2) return ts;
+  ts.sort((p, q) => p - q);
+  const out = [ts[0]!];
+  for (let i = 1; i < ts.length; i++) if (ts[i]! - out[out.length - 1]! > PARAM_EPSILON) out.push(ts[i]!);
+  return out;
+}
+
+/**
+ * f applied to segmentPoint(s, t) given as coordinates: the arithmetic of vecLerp (lines) and
+ * cubicPoint (cubics) inline, so no point object is made.
+ */
+export function segmentPointThen<T>(s: Segment, t: number, f: (x: number, y: number) => T): T {
+  if (s.kind === 'line') return f(s.from.x + (s.to.x - s.from.x) * t, s.from.y + (s.to.y - s.from.y) * t);
+  const mt = 1 - t;
+  const a = mt * mt * mt;
+  const b = 3 * mt * mt * t;
+  const d = 3 * mt * t * t;
+  const e = t * t * t;
+  return f(a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y);
+}

@@ -11,8 +11,11 @@
  * The change is a smooth displacement across the grain: full at the level, fading to zero at
  * `above`/`below` along the grain (smoothstep), and across the piece fading linearly from the
  * edge to zero at the grain line, so the adjoining seams (waist, hem) are trued with it and the
- * opposite edge does not move. Curves in the changed zone are re-drawn as smooth cubics through
- * points of the displaced curve (3 mm apart); everything else stays exact.
+ * opposite edge does not move. Each segment is cut where the field changes its formula (the
+ * grain line, the level, the ends of the taper). Parts the field leaves alone stay exact
+ * slices; parts on which it is affine (a line square to the grain, or the untapered side of a
+ * `waist`/`hem` corner) move their control points, which is exact; the other parts are redrawn
+ * as cubics within REDRAW_TOLERANCE of the exact displaced curve (redrawMapped).
  *
  * Applies to every piece that has the edge, e.g. both side seams: "hip +4 cm" on a trouser is
  * `amount: 10` on the side seams of front and back (2 × (10 + 10) = 40 mm).
@@ -21,11 +24,12 @@
  * fold); a level the piece lacks; an edge the piece lacks.
  */
 import { z } from 'zod';
+import { REDRAW_CHECKS } from '../tolerance.ts';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
-import { type Path, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentLength, type Segment } from '../path.ts';
+import { type Path, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentMapPoints, segmentSlice, type Segment } from '../path.ts';
 import { type Point, vecAdd, vecDot, vecPerp, vecScale } from '../vec.ts';
-import { AlterationError, type Caution, type OpResult, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, smoothThrough } from './common.ts';
+import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 export const girthOpSchema = z.object({
   op: z.literal('girth'),
@@ -39,6 +43,8 @@ export const girthOpSchema = z.object({
 export type GirthOp = z.input<typeof girthOpSchema>;
 
 const smoothstep = (u: number): number => (u <= 0 ? 0 : u >= 1 ? 1 : u * u * (3 - 2 * u));
+/** d smoothstep / du */
+const smoothstepSlope = (u: number): number => (u <= 0 || u >= 1 ? 0 : 6 * u * (1 - u));
 
 interface Field {
   readonly displace: (p: Point) => Point;
@@ -50,6 +56,16 @@ interface Field {
   readonly activeXY: (x: number, y: number) => boolean;
   /** False when no point of the convex hull of `points` can move (a quick reject). */
   readonly mayMove: (points: readonly Point[]) => boolean;
+  /** The lines where the field changes its formula: the grain line, the level, the ends of the taper. */
+  readonly cuts: readonly { readonly origin: Point; readonly direction: Point }[];
+  /** The field as a smooth map with its derivative (redrawMapped). */
+  readonly smooth: SmoothPlaneMap;
+  /**
+   * For a part of a segment lying between two neighbouring cuts (`mid`: a point of it), the
+   * field as the affine map it is on that part, when it is one: the part runs square to the
+   * grain (one taper value) or lies on the untapered side of a waist/hem corner.
+   */
+  readonly affineOn: (part: Segment, mid: Point) => ((p: Point) => Point) | undefined;
 }
 
 function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpSchema>): Field {
@@ -96,7 +112,49 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
   // arithmetic in the same order, so they give the very same numbers without the objects.
   const [gx, gy, ax, ay] = [g.x, g.y, across.x, across.y];
   const weightXY = (x: number, y: number): number => Math.max(0, (x * ax + y * ay - centre) / half);
+  const profileSlope = (bt: number): number => {
+    if (op.level === 'waist' && bt <= bLevel) return 0;
+    if (op.level === 'hem' && bt >= bLevel) return 0;
+    if (bt <= bLevel) return smoothstepSlope((bLevel - bt) / op.above) / op.above;
+    return -smoothstepSlope((bt - bLevel) / op.below) / op.below;
+  };
+  const cuts = [{ origin: vecScale(across, centre), direction: g }];
+  for (const b of [op.level === 'waist' ? undefined : bLevel - op.above, bLevel, op.level === 'hem' ? undefined : bLevel + op.below])
+    if (b !== undefined) cuts.push({ origin: vecScale(g, b), direction: across });
+  const k0 = sign * op.amount;
+  /** The displacement k0·w·(alpha − centre)/half along `across` with one taper value w (no clamping): affine. */
+  const affineWith = (w: number) => (p: Point): Point => {
+    const k = (k0 * w * (p.x * ax + p.y * ay - centre)) / half;
+    return { x: p.x + ax * k, y: p.y + ay * k };
+  };
   return {
+    cuts,
+    smooth: (x, y, out) => {
+      const lin = (x * ax + y * ay - centre) / half;
+      const bt = x * gx + y * gy;
+      const w = Math.max(0, lin);
+      const pr = profile(bt);
+      const k = k0 * w * pr;
+      out[0] = x + ax * k;
+      out[1] = y + ay * k;
+      // ∇k = k0·(pr·∇w + w·pr′·∇β), ∇w = across/half (0 where clamped), ∇β = g
+      const dw = lin > 0 ? pr / half : 0;
+      const dp = w * profileSlope(bt);
+      const kx = k0 * (dw * ax + dp * gx);
+      const ky = k0 * (dw * ay + dp * gy);
+      out[2] = 1 + ax * kx;
+      out[3] = ax * ky;
+      out[4] = ay * kx;
+      out[5] = 1 + ay * ky;
+    },
+    affineOn: (part, mid) => {
+      if ((mid.x * ax + mid.y * ay - centre) / half <= 0) return undefined;
+      const bm = mid.x * gx + mid.y * gy;
+      if ((op.level === 'waist' && bm < bLevel) || (op.level === 'hem' && bm > bLevel)) return affineWith(1);
+      const pts = part.kind === 'line' ? [part.from, part.to] : [part.from, part.c1, part.c2, part.to];
+      for (const p of pts) if (p.x * gx + p.y * gy !== bm) return undefined;
+      return affineWith(profile(bm));
+    },
     displace: (p) => {
       const w = weight(p) * profile(beta(p));
       return w === 0 ? p : vecAdd(p, vecScale(across, sign * op.amount * w));
@@ -121,30 +179,37 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
 
 function deformSegment(s: Segment, field: Field): Segment[] {
   if (!field.mayMove(s.kind === 'line' ? [s.from, s.to] : [s.from, s.c1, s.c2, s.to])) return [s];
-  const len = segmentLength(s, 1e-3);
-  const m = Math.max(2, Math.ceil(len / 2));
-  let moves = false;
-  for (let k = 0; k <= m && !moves; k++) moves = pointAt(s, k / m, field.activeXY);
-  if (!moves) return [s];
-  const n = Math.max(2, Math.ceil(len / 3));
-  const pts: Point[] = new Array<Point>(n + 1);
-  for (let k = 0; k <= n; k++) pts[k] = pointAt(s, k / n, field.displaceXY);
-  return smoothThrough(pts);
+  // parts between the lines where the field changes its formula; on each the field is smooth
+  const ts = [0, ...segmentCutTimes(s, field.cuts), 1];
+  const moves: boolean[] = [];
+  let any = false;
+  for (let i = 1; i < ts.length; i++) {
+    // A part lies wholly inside or wholly outside the moving zone (it crosses none of its
+    // boundaries), so its middle decides; the redraw checks are probed too, in case a root of
+    // a tangent touch was lost to round-off (the field is then ~0 there, but it moves).
+    const [t0, t1] = [ts[i - 1]!, ts[i]!];
+    let m = segmentPointThen(s, (t0 + t1) / 2, field.activeXY);
+    for (let k = 1; k <= REDRAW_CHECKS && !m; k++) m = segmentPointThen(s, t0 + ((t1 - t0) * k) / (REDRAW_CHECKS + 1), field.activeXY);
+    moves.push(m);
+    any ||= m;
+  }
+  if (!any) return [s];
+  const out: Segment[] = [];
+  for (let i = 1; i < ts.length; i++) {
+    const [t0, t1] = [ts[i - 1]!, ts[i]!];
+    const part = ts.length === 2 ? s : segmentSlice(s, t0, t1);
+    if (!moves[i - 1]) {
+      out.push(part);
+      continue;
+    }
+    const affine = field.affineOn(part, segmentPointThen(s, (t0 + t1) / 2, asPoint));
+    if (affine) out.push(segmentMapPoints(part, affine));
+    else out.push(...redrawMapped(s, t0, t1, field.smooth));
+  }
+  return out;
 }
 
-/**
- * f applied to segmentPoint(s, t) given as coordinates: the arithmetic of vecLerp (lines) and
- * cubicPoint (cubics) inline, so no point object is made.
- */
-function pointAt<T>(s: Segment, t: number, f: (x: number, y: number) => T): T {
-  if (s.kind === 'line') return f(s.from.x + (s.to.x - s.from.x) * t, s.from.y + (s.to.y - s.from.y) * t);
-  const mt = 1 - t;
-  const a = mt * mt * mt;
-  const b = 3 * mt * mt * t;
-  const d = 3 * mt * t * t;
-  const e = t * t * t;
-  return f(a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y);
-}
+const asPoint = (x: number, y: number): Point => ({ x, y });
 
 function deformPath(path: Path, field: Field): Path {
   let changed = false;

@@ -19,7 +19,7 @@
  */
 import { z } from 'zod';
 import { type Pattern, type Piece, outlineContour } from '../model.ts';
-import { contourFlattenShared, pathFromSvg } from '../path.ts';
+import { contourExtremePoints, pathFromSvg } from '../path.ts';
 import { MIN_LINE_GRAIN_ANGLE, TRUE_ZONE } from '../tolerance.ts';
 import { type Affine, type Point, AFFINE_IDENTITY, affineTranslate, vecAdd, vecCross, vecNormalize, vecScale, vecSub } from '../vec.ts';
 import {
@@ -117,13 +117,14 @@ function spreadPiece(piece: Piece, lineName: string, amount: number, zone: numbe
     return { map: parallelSpreadMap(line, g, amount, zone), line };
   };
   const outlines = piece.outlines.map((o) => {
-    const { map } = mapFor(o.size);
+    const { map, line } = mapFor(o.size);
     const contour = outlineContour(o);
-    // extent of the outline along g measured from the line (in the oblique β coordinate)
+    // extent of the outline along g measured from the line (in the oblique β coordinate), exact:
+    // β is linear, so its extremes lie where its gradient's projection is extreme
     let min = Infinity;
     let max = -Infinity;
-    for (const f of contourFlattenShared(contour, 0.05)) {
-      const b = map.coordinate(f.point);
+    for (const p of contourExtremePoints(contour, { x: -line.direction.y, y: line.direction.x })) {
+      const b = map.coordinate(p);
       min = Math.min(min, b);
       max = Math.max(max, b);
     }

@@ -22,7 +22,8 @@ import { EndType, FillRule, JoinType, areaD, inflatePathsD, unionD, type PathD }
 import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
-import { type Contour, contourFlattenShared, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
+import { orderByKey } from '../sweep.ts';
+import { type Contour, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
@@ -68,7 +69,7 @@ function runsOf(piece: Piece, outline: Outline, contour: Contour, op: SeamAllowa
     })
     .filter((x) => x !== undefined);
   if (marks.length === 0) {
-    const pts = contourFlattenShared(contour, CUT_FLATNESS).map((f) => f.point);
+    const pts = contourFlatPoints(contour, CUT_FLATNESS);
     return [{ points: [...pts, pts[0]!], width: effective(op.width) }];
   }
   // walk the loop from the first edge's start; gaps between edges get the default width
@@ -116,7 +117,7 @@ function removeSpikes(points: Point[]): Point[] {
 }
 
 function flatOpen(c: Contour): Point[] {
-  return contourFlattenShared(c, CUT_FLATNESS).map((f) => f.point);
+  return contourFlatPoints(c, CUT_FLATNESS);
 }
 
 /** Outward normal of a clockwise (positive-area) contour at the direction d: −perp(d). */
@@ -157,7 +158,7 @@ function cornerPatch(corner: Point, before: Run, after: Run): Point[] | undefine
 export function cutLineByUnion(piece: Piece, outline: Outline, op: SeamAllowanceOp): Contour {
   let contour = outlineContour(outline);
   if (contourSignedArea(contour) < 0) contour = contourReverse(contour);
-  const polygon = toPathD(contourFlattenShared(contour, CUT_FLATNESS).map((f) => f.point));
+  const polygon = toPathD(contourFlatPoints(contour, CUT_FLATNESS));
   const shapes: PathD[] = [polygon];
   if (piece.edges.length === 0) {
     // no named edges: one width all round, mitred corners
@@ -225,7 +226,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   let runs: Run[];
   let closedRun = false;
   if (piece.edges.length === 0) {
-    const pts = contourFlattenShared(contour, CUT_FLATNESS).map((f) => f.point);
+    const pts = contourFlatPoints(contour, CUT_FLATNESS);
     runs = [{ points: [...pts, pts[0]!], width: effective(op.width) }];
     closedRun = true;
   } else {
@@ -240,9 +241,9 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       if (vecDistance(pts[pts.length - 1]!, next[0]!) > 1e-6) return undefined;
       for (let i = 1; i < pts.length; i++) total += vecDistance(pts[i - 1]!, pts[i]!);
     }
-    const flat = contourFlattenShared(contour, CUT_FLATNESS);
+    const flat = contourFlatPoints(contour, CUT_FLATNESS);
     let perimeter = 0;
-    for (let i = 0; i < flat.length; i++) perimeter += vecDistance(flat[i]!.point, flat[(i + 1) % flat.length]!.point);
+    for (let i = 0; i < flat.length; i++) perimeter += vecDistance(flat[i]!, flat[(i + 1) % flat.length]!);
     if (Math.abs(total - perimeter) > 1e-6 * Math.max(1, perimeter)) return undefined;
   }
   // chords: seam start (px, py), unit direction (dx, dy), length, width, run index
@@ -470,13 +471,12 @@ function innerHalvesInside(
   }
   const minX = new Float64Array(count);
   const maxX = new Float64Array(count);
-  const order = new Int32Array(count);
   for (let s = 0; s < count; s++) {
     minX[s] = Math.min(ax[s]!, bx[s]!);
     maxX[s] = Math.max(ax[s]!, bx[s]!);
-    order[s] = s;
   }
-  order.sort((p, q) => minX[p]! - minX[q]!);
+  // any order by minX tests the same pairs (see mayCross in path.ts)
+  const order = orderByKey(minX, count);
   const orient = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number): number => (x1 - x0) * (y2 - y0) - (y1 - y0) * (x2 - x0);
   // two active lists (edges of the cut, probes): each segment is tested against the other kind only
   const activeEdges = new Int32Array(count);

@@ -10,8 +10,10 @@
  * Truing: the wedge is spread over an angular zone about the slash that is `trueZone` mm wide
  * at E, so the edge through E is blended, not stepped; the edge through H only bends at H and
  * keeps its length. A closing wedge folds out on the moving side (+θ then −θ restores the
- * piece). Curves in the rigidly turned part stay exact; in the zone they are redrawn smoothly
- * through points 3 mm apart.
+ * piece). Segments are cut where they cross the zone's boundary rays (the lines through the
+ * hinge at the zone's two angles): parts outside the zone stay exact (unchanged, or turned
+ * rigidly); parts inside it are redrawn within REDRAW_TOLERANCE of their exact image
+ * (redrawMapped, with the wedge map's derivative).
  *
  * Refused: |θ| above 60°; E and H closer than 10 mm; any part of the piece lying behind the
  * hinge (where the turn would have to be undone), which would fold the outline.
@@ -19,10 +21,10 @@
 import { z } from 'zod';
 import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
-import { type Path, segmentLength, segmentPoint, segmentTransform, type Segment, contourFlattenShared } from '../path.ts';
-import { TRUE_ZONE } from '../tolerance.ts';
-import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecRotateAbout, vecSub } from '../vec.ts';
-import { AlterationError, type Caution, type OpResult, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, smoothThrough } from './common.ts';
+import { type Path, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
+import { REDRAW_CHECKS, TRUE_ZONE } from '../tolerance.ts';
+import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
+import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 const point = z.object({ x: z.number(), y: z.number() });
 
@@ -53,6 +55,12 @@ interface WedgeMap {
   readonly map: (p: Point) => Point;
   /** 0 = fixed, 1 = turned rigidly, 2 = in the zone */
   readonly region: (p: Point) => 0 | 1 | 2;
+  /** The same as region, for a point given by its coordinates. */
+  readonly regionXY: (x: number, y: number) => 0 | 1 | 2;
+  /** The lines through the hinge along the zone's boundary rays. */
+  readonly cuts: readonly { readonly origin: Point; readonly direction: Point }[];
+  /** map with its derivative (redrawMapped) */
+  readonly smooth: SmoothPlaneMap;
 }
 
 function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: number): WedgeMap {
@@ -73,27 +81,77 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
     const s = psi(p);
     return side * (f(s) - s);
   };
+  const region = (p: Point): 0 | 1 | 2 => {
+    const s = psi(p);
+    return s <= lo ? 0 : s < hiOld ? 2 : 1;
+  };
+  // inside the zone the turn is side·(f(s) − s) = side·(r − 1)·(s − lo), s = side·angle(ray, p − H),
+  // so its gradient is (r − 1)·∇angle = (r − 1)·perp(v)/|v|², v = p − H
+  const r = (hiNew - lo) / (hiOld - lo);
+  const smooth: SmoothPlaneMap = (x, y, out) => {
+    const p = { x, y };
+    const a = turn(p);
+    const c = Math.cos(a);
+    const sn = Math.sin(a);
+    const q = vecRotateAbout(p, hinge, a);
+    out[0] = q.x;
+    out[1] = q.y;
+    out[2] = c;
+    out[3] = -sn;
+    out[4] = sn;
+    out[5] = c;
+    const vx = x - hinge.x;
+    const vy = y - hinge.y;
+    const v2 = vx * vx + vy * vy;
+    if (vecDistance(p, hinge) < 1e-9 || region(p) !== 2) return;
+    // J = R + (R·perp(v)) ⊗ ∇turn
+    const wx = c * -vy - sn * vx;
+    const wy = sn * -vy + c * vx;
+    const gx = ((r - 1) * -vy) / v2;
+    const gy = ((r - 1) * vx) / v2;
+    out[2] = c + wx * gx;
+    out[3] = -sn + wx * gy;
+    out[4] = sn + wy * gx;
+    out[5] = c + wy * gy;
+  };
   return {
     turn,
     map: (p) => vecRotateAbout(p, hinge, turn(p)),
-    region: (p) => {
-      const s = psi(p);
-      return s <= lo ? 0 : s < hiOld ? 2 : 1;
-    },
+    region,
+    regionXY: (x, y) => region({ x, y }),
+    cuts: [
+      { origin: hinge, direction: vecRotate(ray, side * lo) },
+      { origin: hinge, direction: vecRotate(ray, side * hiOld) },
+    ],
+    smooth,
   };
 }
 
 function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRotate>): Segment[] {
-  const len = segmentLength(s, 1e-3);
-  const k = Math.max(2, Math.ceil(len / 2));
-  // probe until the regions differ (or one is the zone): then the segment is redrawn
-  const first = m.region(segmentPoint(s, 0));
-  let uniform = first !== 2;
-  for (let i = 1; i <= k && uniform; i++) uniform = m.region(segmentPoint(s, i / k)) === first;
-  if (uniform && first === 0) return [s];
-  if (uniform && first === 1) return [segmentTransform(s, rigid)];
-  const n = Math.max(2, Math.ceil(len / 3));
-  return smoothThrough(Array.from({ length: n + 1 }, (_, i) => m.map(segmentPoint(s, i / n))));
+  // parts between the zone's boundary lines lie wholly in one region; its middle decides, and
+  // the redraw checks are probed too (a tangent touch whose root round-off lost, or a segment
+  // running behind the hinge, where the angle wraps round)
+  const ts = [0, ...segmentCutTimes(s, m.cuts), 1];
+  const regions: (0 | 1 | 2)[] = [];
+  for (let i = 1; i < ts.length; i++) {
+    const [t0, t1] = [ts[i - 1]!, ts[i]!];
+    let region = segmentPointThen(s, (t0 + t1) / 2, m.regionXY);
+    for (let k = 1; k <= REDRAW_CHECKS && region !== 2; k++) if (segmentPointThen(s, t0 + ((t1 - t0) * k) / (REDRAW_CHECKS + 1), m.regionXY) !== region) region = 2;
+    regions.push(region);
+  }
+  if (regions.length === 1 && regions[0] === 0) return [s];
+  if (regions.length === 1 && regions[0] === 1) return [segmentTransform(s, rigid)];
+  const out: Segment[] = [];
+  for (let i = 1; i < ts.length; i++) {
+    const [t0, t1] = [ts[i - 1]!, ts[i]!];
+    const region = regions[i - 1]!;
+    if (region === 2) out.push(...redrawMapped(s, t0, t1, m.smooth));
+    else {
+      const part = segmentSlice(s, t0, t1);
+      out.push(region === 0 ? part : segmentTransform(part, rigid));
+    }
+  }
+  return out;
 }
 
 export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpResult {
@@ -130,12 +188,12 @@ export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpRe
     ...target,
     outlines: target.outlines.map((o) => {
       // nothing of the piece may lie behind the hinge on the moving side's far boundary
-      for (const f of contourFlattenShared(outlineContour(o), 0.1)) {
-        const d = vecDistance(f.point, op.hinge);
+      for (const p of contourFlatPoints(outlineContour(o), 0.1)) {
+        const d = vecDistance(p, op.hinge);
         if (d < 1) continue;
-        const s = side * vecAngleBetween(ray, vecSub(f.point, op.hinge));
+        const s = side * vecAngleBetween(ray, vecSub(p, op.hinge));
         if (s + theta > Math.PI - 1e-9 || (theta < 0 && s > Math.PI + theta))
-          throw new AlterationError('fold', `slash-spread on "${target.name}" size "${o.size}": part of the piece lies behind the hinge near (${f.point.x.toFixed(1)}, ${f.point.y.toFixed(1)}); the wedge would fold the outline — put the hinge on the far edge`, f.point);
+          throw new AlterationError('fold', `slash-spread on "${target.name}" size "${o.size}": part of the piece lies behind the hinge near (${p.x.toFixed(1)}, ${p.y.toFixed(1)}); the wedge would fold the outline — put the hinge on the far edge`, p);
       }
       const mapped = mapOutline(o, mapPath, m.map);
       assertSimple(outlineContour(mapped), `slash-spread on "${target.name}" size "${o.size}"`);

@@ -5,6 +5,8 @@ import {
   affineRotate,
   affineScale,
   contourArea,
+  contourExtremePoints,
+  contourFlatten,
   contourFromPoints,
   contourIsSimple,
   contourLength,
@@ -181,5 +183,41 @@ describe('units — outside references', () => {
     const px = first('M0 0 H96 V96 H0 Z');
     const mm = contourTransform(px, affineScale(25.4 / 96));
     expectNear(contourLength(mm), 4 * 25.4, 1e-12);
+  });
+});
+
+describe('contourExtremePoints (exact extent along a direction)', () => {
+  it('gives the range of a fine flattening (whose vertices lie on the curve), never narrower, at most the flattening tolerance wider (property)', () => {
+    const coord = fc.double({ min: -1000, max: 1000, noNaN: true });
+    const point = fc.record({ x: coord, y: coord });
+    fc.assert(
+      fc.property(fc.array(fc.tuple(point, point, point, fc.boolean()), { minLength: 1, maxLength: 5 }), point, fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), (parts, start, angle) => {
+        let from = start;
+        const segments = parts.map(([c1, c2, to, straight]) => {
+          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1, c2, to };
+          from = to;
+          return s;
+        });
+        const contour = { segments, closed: false };
+        const u = { x: Math.cos(angle), y: Math.sin(angle) };
+        const range = (pts: readonly { x: number; y: number }[]) => {
+          let min = Infinity;
+          let max = -Infinity;
+          for (const p of pts) {
+            const v = p.x * u.x + p.y * u.y;
+            min = Math.min(min, v);
+            max = Math.max(max, v);
+          }
+          return { min, max };
+        };
+        const exact = range(contourExtremePoints(contour, u));
+        const fine = range(contourFlatten(contour, 1e-4).map((f) => f.point));
+        expect(exact.max).toBeGreaterThanOrEqual(fine.max - 1e-9);
+        expect(exact.min).toBeLessThanOrEqual(fine.min + 1e-9);
+        expect(exact.max).toBeLessThanOrEqual(fine.max + 1e-4 + 1e-9);
+        expect(exact.min).toBeGreaterThanOrEqual(fine.min - 1e-4 - 1e-9);
+      }),
+      { numRuns: 300 },
+    );
   });
 });

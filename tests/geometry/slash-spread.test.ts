@@ -43,7 +43,7 @@ describe('slash and spread about a hinge', () => {
     parsePattern(out);
   });
 
-  it('opening then closing by the same angle restores the piece (within the 3 mm resampling of the zone)', () => {
+  it('opening then closing by the same angle restores the piece (within the redraw tolerance of the zone)', () => {
     const { side, centre } = slash();
     const theta = wedgeAngle(20, Math.hypot(centre.x - side.x, centre.y - side.y));
     const open = performSlashSpread(base, { op: 'slash-spread', piece: 'front', from: centre, hinge: side, angle: theta }).pattern;
