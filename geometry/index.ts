@@ -33,3 +33,7 @@ export * from './print/layout.ts';
 export * from './print/empty.ts';
 export * from './print/plan.ts';
 export * from './print/scene.ts';
+// Fit planner: body, fabric, size tables, the plan (geometry/README.md, "Fit planner").
+export * from './fit/body.ts';
+export * from './fit/chart.ts';
+export * from './fit/plan.ts';
