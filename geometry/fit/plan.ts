@@ -140,6 +140,8 @@ export const planOptionsSchema = z
     sizes: levelRecord(z.union([z.string().trim().min(1), z.number()]).transform(String)).default({}),
     /** Unit of the lengths in the reasons. */
     unit: z.enum(['in', 'cm']).default('cm'),
+    /** Seam allowance (mm) of pieces whose outline includes it, when the table is measured on the pattern. */
+    seamAllowance: z.number().min(0).max(100).optional(),
   })
   .strict();
 export type PlanOptions = z.input<typeof planOptionsSchema>;
@@ -309,7 +311,7 @@ export function planFit(input: PlanInput): FitPlan {
     }
   }
   if (chartInput === undefined && pattern === undefined) throw new FitInputError('give a size table or a pattern to measure');
-  const chart = chartInput !== undefined ? parseSizeChart(chartInput) : chartFromPattern(pattern!);
+  const chart = chartInput !== undefined ? parseSizeChart(chartInput) : chartFromPattern(pattern!, opts.seamAllowance !== undefined ? { seamAllowance: opts.seamAllowance } : {});
   const scale = scaleOf(chart);
   const unit: LengthUnit = opts.unit;
   const L = (v: number): string => formatLength(v, unit);
@@ -412,7 +414,7 @@ export function planFit(input: PlanInput): FitPlan {
         `Size ${size} at the ${level} is beyond the printed sizes (${scale.sizes[0]!.size}–${scale.sizes[scale.sizes.length - 1]!.size}): it is extrapolated, an estimate. Sew a test garment first.`,
       );
     if (stopped) caution(`At the ${level} even size ${size}, ${MAX_EXTRAPOLATION_STEPS} grade step beyond the table, misses by ${L(Math.abs(change))}: a girth change takes the rest. Large changes are estimates: sew a test garment first.`);
-    if (change !== 0 && sizeFrom === 'chosen' && change > 0 && stretch === 0)
+    if (change > 0 && stretch === 0)
       caution(`Size ${size} is ${L(change)} too small at the ${level} in a cloth without stretch: that is uncomfortable to wear. Let it out, choose a larger size there, or use a cloth with stretch.`);
   }
 

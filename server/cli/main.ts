@@ -6,9 +6,10 @@ import { alterCommand } from './commands/alter.ts';
 import { exportCommand } from './commands/export.ts';
 import { importCommand } from './commands/import.ts';
 import { measureCommand } from './commands/measure.ts';
+import { planCommand } from './commands/plan.ts';
 
 /** Commands register here as the engine, print and planner land. */
-const COMMANDS: Command[] = [importCommand, alterCommand, measureCommand, exportCommand];
+const COMMANDS: Command[] = [importCommand, alterCommand, measureCommand, exportCommand, planCommand];
 
 function version(): string {
   const pkg = JSON.parse(readFileSync(path.join(projectRoot, 'package.json'), 'utf8')) as { version: string };
