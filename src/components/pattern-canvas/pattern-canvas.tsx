@@ -102,6 +102,9 @@ export function PatternCanvas({
 }: PatternCanvasProps) {
   const frameRef = useRef<HTMLDivElement>(null);
   const canvasRef = useRef<HTMLCanvasElement>(null);
+  const referenceCanvasRef = useRef<HTMLCanvasElement>(null);
+  /** The canvas's client rect while a pointer is pressed (read once, not on every move). */
+  const rectRef = useRef<DOMRect | null>(null);
   const sceneRef = useRef<PatternScene | null>(null);
   const dragRef = useRef<Drag | null>(null);
   const spaceRef = useRef(false);
@@ -142,6 +145,7 @@ export function PatternCanvas({
     const scene = new PatternScene(canvas);
     sceneRef.current = scene;
     const observer = new ResizeObserver(([entry]) => {
+      rectRef.current = null;
       if (!entry) return;
       const { width, height } = entry.contentRect;
       scene.setSize(width, height);
@@ -153,6 +157,21 @@ export function PatternCanvas({
       scene.destroy();
       sceneRef.current = null;
     };
+  }, []);
+
+  // The faint reference lines have a canvas of their own beneath, present while there is a reference.
+  const hasReference = reference !== undefined;
+  useEffect(() => {
+    sceneRef.current?.attachReferenceCanvas(hasReference ? referenceCanvasRef.current : null);
+  }, [hasReference]);
+
+  // A scroll moves the canvas under a pressed pointer: read its rect again.
+  useEffect(() => {
+    const forget = () => {
+      rectRef.current = null;
+    };
+    window.addEventListener('scroll', forget, { capture: true, passive: true });
+    return () => window.removeEventListener('scroll', forget, { capture: true });
   }, []);
 
   // Shapes: update in place (every animation frame while a handle is dragged).
@@ -202,9 +221,12 @@ export function PatternCanvas({
     return () => frame.removeEventListener('wheel', onWheel);
   }, []);
 
-  // Relative to the canvas (inside the frame's border), where the view transform starts.
+  // Relative to the canvas (inside the frame's border), where the view transform starts. While a
+  // pointer is pressed the rect read at the press is used: a layout read on every move would
+  // force the browser to lay the page out again after each redraw.
   const local = (e: { clientX: number; clientY: number }): Point => {
-    const rect = canvasRef.current!.getBoundingClientRect();
+    const rect = rectRef.current ?? canvasRef.current!.getBoundingClientRect();
+    if (dragRef.current) rectRef.current = rect;
     return { x: e.clientX - rect.left, y: e.clientY - rect.top };
   };
 
@@ -213,6 +235,7 @@ export function PatternCanvas({
   const onPointerDown = (e: PointerEvent<HTMLCanvasElement>) => {
     const scene = sceneRef.current;
     if (!transform || !scene || e.button !== 0) return;
+    rectRef.current = canvasRef.current!.getBoundingClientRect();
     const p = local(e);
     if (!spaceRef.current) {
       for (const h of handles) {
@@ -255,7 +278,9 @@ export function PatternCanvas({
   const endDrag = (e: PointerEvent<HTMLCanvasElement>, cancelled: boolean) => {
     const drag = dragRef.current;
     if (!drag || drag.pointerId !== e.pointerId) return;
+    const p = local(e);
     dragRef.current = null;
+    rectRef.current = null;
     if (drag.kind === 'handle') {
       onHandleDrag?.(drag.id, drag.last, 'end');
       return;
@@ -264,7 +289,7 @@ export function PatternCanvas({
     if (drag.moved) {
       if (transform) onViewChange?.({ mode: 'scale', pxPerMm: transform.scale, centre: viewCentre(transform, size) });
     } else if (!cancelled && scene && transform && onPick) {
-      const world = screenToWorld(transform, local(e));
+      const world = screenToWorld(transform, p);
       onPick(pickAt(pattern, scene.layout, world, pickTolerancePx / transform.scale));
     }
   };
@@ -327,7 +352,7 @@ export function PatternCanvas({
         if (e.key === ' ') spaceRef.current = false;
       }}
       className={cx(
-        'relative h-96 w-full touch-none overflow-hidden rounded-lg border border-calico-300 bg-calico-50 select-none focus-visible:outline-3 focus-visible:outline-tape-400',
+        'relative isolate h-96 w-full touch-none overflow-hidden rounded-lg border border-calico-300 bg-calico-50 select-none focus-visible:outline-3 focus-visible:outline-tape-400',
         className,
       )}
     >
@@ -341,6 +366,10 @@ export function PatternCanvas({
         onPointerUp={(e) => endDrag(e, false)}
         onPointerCancel={(e) => endDrag(e, true)}
       />
+      {hasReference && (
+        // After the drawing canvas (which stays the first canvas) but stacked beneath it, above the frame's background.
+        <canvas ref={referenceCanvasRef} aria-hidden className="pointer-events-none absolute inset-0 -z-10 block" />
+      )}
       {transform &&
         handles.map((h) => {
           const at = layout?.placements.get(h.piece);

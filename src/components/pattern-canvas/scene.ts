@@ -1,7 +1,9 @@
 /**
  * The paper.js side of the pattern canvas: one PaperScope per canvas, items kept between
  * updates. `setPatterns` updates the existing items' path data when only shapes changed and
- * rebuilds when the set of pieces, outlines, lines or landmarks changed. Browser only.
+ * rebuilds when the set of pieces, outlines, lines or landmarks changed; pieces whose paths and
+ * landmarks are unchanged are left alone. The faint reference lines go on their own canvas
+ * (ReferenceDrawing) so a redraw of the bold pattern does not repaint them. Browser only.
  */
 import paperCore from 'paper/dist/paper-core';
 import {
@@ -23,6 +25,8 @@ import {
   type Point,
 } from '../../../geometry/index.ts';
 import { layoutPieces, type CanvasLayout } from './layout.ts';
+import { ReferenceDrawing } from './reference-drawing.ts';
+import { overlayStructure, pieceShapeChanged, pieceStructure, sameLayout } from './scene-diff.ts';
 import type { ViewTransform } from './view-math.ts';
 
 type Scope = paper.PaperScope;
@@ -84,22 +88,12 @@ interface LineItems {
 }
 
 interface PieceItems {
+  /** The piece last drawn: its unchanged paths are not set again. */
+  piece: Piece;
   group: paper.Group;
   outlines: { outline: Outline; path: paper.CompoundPath; cut?: paper.CompoundPath; marks: Item[] }[];
   lines: LineItems[];
   label: paper.PointText;
-}
-
-/** Everything that decides which items exist (not where they are). */
-function structureKey(p: Pattern | undefined): string {
-  if (!p) return '';
-  return JSON.stringify(
-    p.pieces.map((piece) => [
-      piece.name,
-      piece.outlines.map((o) => [o.size, o.cut !== undefined, o.points.map((lm) => [lm.name, lm.kind])]),
-      piece.lines.map((l) => [l.role, l.name, l.size ?? null, pathFromSvg(l.d).length]),
-    ]),
-  );
 }
 
 function lineMidpoint(d: string): { point: Point; tangent: Point } | undefined {
@@ -132,19 +126,33 @@ function arrowData(d: string): string {
   return `${head(ends.end, { x: -dir.x, y: -dir.y })} ${head(ends.start, dir)}`;
 }
 
+/** One overlay's items, kept while only positions and label texts change. */
+interface OverlayItems {
+  overlay: CanvasOverlay;
+  item: paper.Path | paper.Shape;
+  text?: paper.PointText;
+}
+
 export class PatternScene {
   readonly scope: Scope;
-  private readonly referenceLayer: paper.Layer;
   private readonly patternLayer: paper.Layer;
   private readonly highlightLayer: paper.Layer;
   private readonly overlayLayer: paper.Layer;
+  private readonly referenceDrawing = new ReferenceDrawing(INK.calico400, 1);
   private pieces = new Map<string, PieceItems>();
-  private referenceGroups = new Map<string, { group: paper.Group; paths: paper.CompoundPath[] }>();
+  private overlayItems: OverlayItems[] = [];
+  private overlayKey = '';
   private key = '';
-  private referenceKey = '';
+  /** Piece → its part of the structure key (pieces are not mutated: a changed piece is a new object). */
+  private pieceKeys = new WeakMap<Piece, string>();
+  /** Path data → number of contours, from the last structure key. */
+  private contourCounts = new Map<string, number>();
+  private layoutNames: string | undefined;
   private pattern: Pattern | undefined;
   private reference: Pattern | undefined;
   private highlight: CanvasHighlight | undefined;
+  /** The piece the highlight was drawn from: a new piece object draws it again. */
+  private highlighted: Piece | undefined;
   private overlays: readonly CanvasOverlay[] = [];
   private scale = 1;
   layout: CanvasLayout = { placements: new Map(), bounds: { minX: 0, minY: 0, maxX: 0, maxY: 0 } };
@@ -160,7 +168,6 @@ export class PatternScene {
       this.scope.project.addLayer(l);
       return l;
     };
-    this.referenceLayer = layer();
     this.highlightLayer = layer();
     this.patternLayer = layer();
     this.overlayLayer = layer();
@@ -171,8 +178,14 @@ export class PatternScene {
     this.scope.activate();
   }
 
+  /** The canvas beneath this one where the reference's faint size lines are drawn (null: none). */
+  attachReferenceCanvas(canvas: HTMLCanvasElement | null): void {
+    this.referenceDrawing.attach(canvas);
+  }
+
   /** Remove the project, its view (and the view's canvas listeners) and the scope itself. */
   destroy(): void {
+    this.referenceDrawing.destroy();
     // PaperScope#remove (paper-core 0.12.20: clear() removes every project and its view, then the
     // scope leaves PaperScope._scopes) is missing from the bundled typings.
     (this.scope as Scope & { remove(): void }).remove();
@@ -181,42 +194,53 @@ export class PatternScene {
   setSize(width: number, height: number): void {
     this.activate();
     this.scope.view.viewSize = new this.scope.Size(Math.max(1, width), Math.max(1, height));
+    this.referenceDrawing.setSize(width, height);
   }
 
   setView(t: ViewTransform): void {
     this.activate();
     this.scope.view.matrix = new this.scope.Matrix(t.scale, 0, 0, t.scale, t.tx, t.ty);
+    this.referenceDrawing.setView(t);
     if (t.scale !== this.scale) {
       this.scale = t.scale;
       this.applyScreenSizes();
     }
   }
 
-  /** Draw `pattern` over `reference`. Updates path data in place unless the structure changed. */
+  /**
+   * Draw `pattern` over `reference`. Updates path data in place unless the structure changed,
+   * and only for the pieces whose paths or landmarks changed; the same reference object is not
+   * drawn again.
+   */
   setPatterns(pattern: Pattern, reference: Pattern | undefined): void {
     this.activate();
+    const referenceChanged = reference !== this.reference;
     this.pattern = pattern;
     this.reference = reference;
-    this.layout = layoutPieces(pattern, reference);
-    const key = structureKey(pattern);
+    const layoutChanged = this.updateLayout(pattern, reference, referenceChanged);
+    const key = this.structureKey(pattern);
+    let changed: ReadonlySet<string> | 'all';
     if (key !== this.key) {
       this.key = key;
       this.buildPattern(pattern);
       this.rebuilds++;
+      changed = 'all';
     } else {
-      this.updatePattern(pattern);
+      changed = this.updatePattern(pattern);
     }
-    const refKey = structureKey(reference);
-    if (refKey !== this.referenceKey) {
-      this.referenceKey = refKey;
-      this.buildReference(reference);
-    } else if (reference) {
-      this.updateReference(reference);
+    this.referenceDrawing.setReference(reference, this.layout, referenceChanged);
+    if (layoutChanged) this.placeGroups();
+    const h = this.highlight;
+    if (layoutChanged || (h && pattern.pieces.find((p) => p.name === h.piece) !== this.highlighted)) this.drawHighlight();
+    if (layoutChanged) {
+      this.drawOverlays();
+      this.sizeOverlays();
     }
-    this.placeGroups();
-    this.drawHighlight();
-    this.drawOverlays();
-    this.applyScreenSizes();
+    for (const piece of pattern.pieces) {
+      if (changed !== 'all' && !changed.has(piece.name)) continue;
+      const items = this.pieces.get(piece.name);
+      if (items) this.placeLabels(piece, items);
+    }
   }
 
   setHighlight(h: CanvasHighlight | undefined): void {
@@ -228,17 +252,55 @@ export class PatternScene {
   setOverlays(overlays: readonly CanvasOverlay[]): void {
     this.activate();
     this.overlays = overlays;
-    this.drawOverlays();
-    this.applyScreenSizes();
+    const key = overlayStructure(overlays);
+    if (key === this.overlayKey) {
+      this.moveOverlays();
+    } else {
+      this.drawOverlays();
+    }
+    this.sizeOverlays();
+  }
+
+  /** Lay the pieces out again unless nothing the layout depends on changed; true when it moved anything. */
+  private updateLayout(pattern: Pattern, reference: Pattern | undefined, referenceChanged: boolean): boolean {
+    const names = pattern.pieces.map((p) => p.name).join('\u0000');
+    // Sizes come from the reference for every piece it has: the same reference and the same
+    // pieces give the same layout, however the altered outlines moved.
+    const fromReference = reference !== undefined && pattern.pieces.every((p) => reference.pieces.some((r) => r.name === p.name));
+    if (!referenceChanged && fromReference && names === this.layoutNames) return false;
+    this.layoutNames = names;
+    const next = layoutPieces(pattern, reference);
+    if (sameLayout(this.layout, next)) return false;
+    this.layout = next;
+    return true;
+  }
+
+  private structureKey(pattern: Pattern): string {
+    const previous = this.contourCounts;
+    const counts = new Map<string, number>();
+    const contours = (d: string) => {
+      let n = counts.get(d) ?? previous.get(d);
+      if (n === undefined) n = pathFromSvg(d).length;
+      counts.set(d, n);
+      return n;
+    };
+    const parts = pattern.pieces.map((piece) => {
+      let k = this.pieceKeys.get(piece);
+      if (k === undefined) {
+        k = JSON.stringify(pieceStructure(piece, contours));
+        this.pieceKeys.set(piece, k);
+      }
+      return k;
+    });
+    if (counts.size > 0) this.contourCounts = counts;
+    return parts.join('\n');
   }
 
   private placeGroups(): void {
-    const place = (name: string, group: paper.Group) => {
+    for (const [name, items] of this.pieces) {
       const at = this.layout.placements.get(name);
-      group.matrix = new this.scope.Matrix(1, 0, 0, 1, at?.dx ?? 0, at?.dy ?? 0);
-    };
-    for (const [name, items] of this.pieces) place(name, items.group);
-    for (const [name, { group }] of this.referenceGroups) place(name, group);
+      items.group.matrix = new this.scope.Matrix(1, 0, 0, 1, at?.dx ?? 0, at?.dy ?? 0);
+    }
   }
 
   private newGroup(layer: paper.Layer): paper.Group {
@@ -259,31 +321,6 @@ export class PatternScene {
     const t = new this.scope.PointText({ content: text, fillColor: colour, fontFamily: 'Figtree Variable, ui-sans-serif, sans-serif', fontWeight: weight, justification: 'center' });
     t.data = { px };
     return t;
-  }
-
-  private buildReference(reference: Pattern | undefined): void {
-    this.referenceLayer.removeChildren();
-    this.referenceGroups.clear();
-    if (!reference) return;
-    for (const piece of reference.pieces) {
-      const group = this.newGroup(this.referenceLayer);
-      const paths = piece.outlines.map((o) => {
-        const p = this.compound(o.d, { strokeColor: new this.scope.Color(INK.calico400), strokeWidth: 1 });
-        group.addChild(p);
-        return p;
-      });
-      this.referenceGroups.set(piece.name, { group, paths });
-    }
-  }
-
-  private updateReference(reference: Pattern): void {
-    for (const piece of reference.pieces) {
-      const items = this.referenceGroups.get(piece.name);
-      piece.outlines.forEach((o, i) => {
-        const p = items?.paths[i];
-        if (p) p.pathData = o.d;
-      });
-    }
   }
 
   private buildPattern(pattern: Pattern): void {
@@ -317,9 +354,11 @@ export class PatternScene {
       const lines = piece.lines.map((line) => this.buildLine(group, line));
       const label = this.label(piece.name, LABEL_PX.piece, INK.ink900, 600);
       group.addChild(label);
-      this.pieces.set(piece.name, { group, outlines, lines, label });
+      // the paths hold the piece's data already; placeLabels sets the lengthen lines' two strokes
+      this.pieces.set(piece.name, { piece, group, outlines, lines, label });
+      const at = this.layout.placements.get(piece.name);
+      group.matrix = new this.scope.Matrix(1, 0, 0, 1, at?.dx ?? 0, at?.dy ?? 0);
     }
-    this.updatePattern(pattern);
   }
 
   private buildLine(group: paper.Group, line: PatternLine): LineItems {
@@ -331,6 +370,7 @@ export class PatternScene {
       case 'grain':
         main = this.compound(line.d, { strokeColor: colour(INK.denim700), strokeWidth: 1.25 });
         arrows = Object.assign(new this.scope.Path(), { strokeColor: colour(INK.denim700), strokeWidth: 1.25, strokeScaling: false });
+        arrows.pathData = arrowData(line.d);
         break;
       case 'lengthen':
         main = this.compound(line.d, { strokeColor: colour(INK.chalk600), strokeWidth: 1 });
@@ -350,44 +390,66 @@ export class PatternScene {
     return { line, main, ...(twin ? { twin } : {}), ...(arrows ? { arrows } : {}), label };
   }
 
-  private updatePattern(pattern: Pattern): void {
+  /** Set the paths that changed; the names of the pieces that drew differently. */
+  private updatePattern(pattern: Pattern): Set<string> {
+    const changed = new Set<string>();
     for (const piece of pattern.pieces) {
       const items = this.pieces.get(piece.name);
       if (!items) continue;
+      const before = items.piece;
+      items.piece = piece;
+      const moved = pieceShapeChanged(before, piece);
+      if (moved) changed.add(piece.name);
       piece.outlines.forEach((outline, i) => {
         const o = items.outlines[i];
         if (!o) return;
+        const was = o.outline;
         o.outline = outline;
-        o.path.pathData = outline.d;
-        if (o.cut && outline.cut !== undefined) o.cut.pathData = outline.cut;
+        if (!moved) return;
+        // Setting path data rebuilds the compound path's children: only when it differs.
+        if (outline.d !== was.d) o.path.pathData = outline.d;
+        if (o.cut && outline.cut !== undefined && outline.cut !== was.cut) o.cut.pathData = outline.cut;
       });
       piece.lines.forEach((line, i) => {
         const l = items.lines[i];
         if (!l) return;
+        const was = l.line;
         l.line = line;
-        l.main.pathData = line.d;
+        if (!moved || line.d === was.d) return;
+        // a lengthen/shorten line's two strokes are set beside it by placeLabels
+        if (!l.twin) l.main.pathData = line.d;
         if (l.arrows) l.arrows.pathData = arrowData(line.d);
       });
     }
+    return changed;
   }
 
   /** Positions that depend on the pattern and the zoom: labels, marks, the lengthen line's twin. */
   private placeLabels(piece: Piece, items: PieceItems): void {
     const mm = (px: number) => px / this.scale;
+    const setPoint = (t: paper.PointText, x: number, y: number) => {
+      const p = t.point;
+      if (p.x !== x || p.y !== y) t.point = new this.scope.Point(x, y);
+    };
+    const setFontSize = (t: paper.PointText, size: number) => {
+      if (t.fontSize !== size) t.fontSize = size;
+    };
     for (const o of items.outlines) {
-      const contour = outlineContour(o.outline);
+      const contour = o.outline.points.some((lm) => lm.kind === 'notch') ? outlineContour(o.outline) : undefined;
       o.outline.points.forEach((lm, i) => {
         const item = o.marks[i];
         if (!item) return;
         if (item instanceof this.scope.Path) {
+          if (!contour) return;
           const near = contourNearest(contour, lm);
           const seg = contour.segments[near.segmentIndex]!;
           const n = vecPerp(vecNormalize(segmentTangent(seg, near.t)));
           const h = NOTCH_MM / 2;
           item.pathData = `M ${lm.x - n.x * h} ${lm.y - n.y * h} L ${lm.x + n.x * h} ${lm.y + n.y * h}`;
         } else if (item instanceof this.scope.Shape) {
-          item.position = new this.scope.Point(lm.x, lm.y);
-          item.radius = mm(DOT_PX);
+          const at = item.position;
+          if (at.x !== lm.x || at.y !== lm.y) item.position = new this.scope.Point(lm.x, lm.y);
+          if (item.radius !== mm(DOT_PX)) item.radius = mm(DOT_PX);
         }
       });
     }
@@ -395,9 +457,9 @@ export class PatternScene {
       const mid = lineMidpoint(l.line.d);
       if (mid) {
         const n = vecPerp(mid.tangent);
-        l.label.fontSize = mm(LABEL_PX.line);
+        setFontSize(l.label, mm(LABEL_PX.line));
         // beside the line, on the side away from the piece label above it
-        l.label.point = new this.scope.Point(mid.point.x - n.x * mm(6), mid.point.y - n.y * mm(6) + mm(LABEL_PX.line) / 3);
+        setPoint(l.label, mid.point.x - n.x * mm(6), mid.point.y - n.y * mm(6) + mm(LABEL_PX.line) / 3);
         if (l.twin) {
           l.main.pathData = l.line.d;
           l.main.translate(new this.scope.Point(n.x * mm(DOUBLE_GAP_PX), n.y * mm(DOUBLE_GAP_PX)));
@@ -409,33 +471,26 @@ export class PatternScene {
     const b = this.layout.placements.get(piece.name)?.bounds;
     const first = items.outlines[0];
     const fb = first ? first.path.bounds : undefined;
-    items.label.fontSize = mm(LABEL_PX.piece);
-    if (fb) items.label.point = new this.scope.Point(fb.center.x, fb.center.y);
-    else if (b) items.label.point = new this.scope.Point((b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
+    setFontSize(items.label, mm(LABEL_PX.piece));
+    if (fb) setPoint(items.label, fb.center.x, fb.center.y);
+    else if (b) setPoint(items.label, (b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
   }
 
   private applyScreenSizes(): void {
-    if (!this.pattern) return;
-    for (const piece of this.pattern.pieces) {
-      const items = this.pieces.get(piece.name);
-      if (items) this.placeLabels(piece, items);
-    }
-    for (const item of this.overlayLayer.getItems({ recursive: true })) {
-      const px = (item.data as { px?: number } | undefined)?.px;
-      if (px === undefined) continue;
-      if (item instanceof this.scope.Shape) item.radius = px / this.scale;
-      else if (item instanceof this.scope.PointText) {
-        const anchor = (item.data as { anchor: Point }).anchor;
-        item.fontSize = px / this.scale;
-        item.point = new this.scope.Point(anchor.x + 8 / this.scale, anchor.y - 6 / this.scale);
+    if (this.pattern) {
+      for (const piece of this.pattern.pieces) {
+        const items = this.pieces.get(piece.name);
+        if (items) this.placeLabels(piece, items);
       }
     }
+    this.sizeOverlays();
   }
 
   private drawHighlight(): void {
     this.highlightLayer.removeChildren();
     const h = this.highlight;
     const piece = h && this.pattern?.pieces.find((p) => p.name === h.piece);
+    this.highlighted = piece;
     const at = piece && this.layout.placements.get(piece.name);
     if (!h || !piece || !at) return;
     const group = this.newGroup(this.highlightLayer);
@@ -458,15 +513,14 @@ export class PatternScene {
     }
   }
 
+  /** Build the overlay items afresh. */
   private drawOverlays(): void {
     this.overlayLayer.removeChildren();
+    this.overlayItems = [];
+    this.overlayKey = overlayStructure(this.overlays);
     for (const o of this.overlays) {
-      const at = this.layout.placements.get(o.piece);
-      if (!at) continue;
-      const dx = at.dx;
-      const dy = at.dy;
       if (o.kind === 'line') {
-        const path = new this.scope.Path.Line(new this.scope.Point(o.from.x + dx, o.from.y + dy), new this.scope.Point(o.to.x + dx, o.to.y + dy));
+        const path = new this.scope.Path.Line(new this.scope.Point(0, 0), new this.scope.Point(0, 0));
         Object.assign(path, {
           strokeColor: new this.scope.Color(OVERLAY_INK[o.style?.colour ?? 'chalk']),
           strokeWidth: o.style?.widthPx ?? 1.5,
@@ -474,23 +528,75 @@ export class PatternScene {
           ...(o.style?.dashed ? { dashArray: [5, 4] } : {}),
         });
         this.overlayLayer.addChild(path);
+        this.overlayItems.push({ overlay: o, item: path });
         continue;
       }
-      const centre = new this.scope.Point(o.at.x + dx, o.at.y + dy);
       const handle = o.kind === 'handle';
-      const dot = new this.scope.Shape.Circle(centre, 1);
+      const dot = new this.scope.Shape.Circle(new this.scope.Point(0, 0), 1);
       Object.assign(dot, handle
         ? { fillColor: new this.scope.Color(INK.calico50), strokeColor: new this.scope.Color(INK.denim600), strokeWidth: 2, strokeScaling: false }
         : { fillColor: new this.scope.Color(OVERLAY_INK[o.colour ?? 'denim']) });
       dot.data = { px: handle ? HANDLE_PX : POINT_PX };
       this.overlayLayer.addChild(dot);
       const text = o.label;
+      let t: paper.PointText | undefined;
       if (text) {
-        const t = this.label(text, LABEL_PX.point, INK.ink900, 600);
+        t = this.label(text, LABEL_PX.point, INK.ink900, 600);
         t.justification = 'left';
-        t.data = { px: LABEL_PX.point, anchor: { x: centre.x, y: centre.y } };
+        t.data = { px: LABEL_PX.point, anchor: { x: 0, y: 0 } };
         this.overlayLayer.addChild(t);
       }
+      this.overlayItems.push({ overlay: o, item: dot, ...(t ? { text: t } : {}) });
+    }
+    this.moveOverlays(true);
+  }
+
+  /** Put the overlay items where the current overlays (same structure) say, with their label texts. */
+  private moveOverlays(all = false): void {
+    this.overlays.forEach((o, i) => {
+      const items = this.overlayItems[i];
+      if (!items) return;
+      const was = items.overlay;
+      items.overlay = o;
+      if (!all && was === o) return;
+      const at = this.layout.placements.get(o.piece);
+      const visible = at !== undefined;
+      items.item.visible = visible;
+      if (items.text) items.text.visible = visible;
+      if (!at) return;
+      if (o.kind === 'line') {
+        if (items.item instanceof this.scope.Path) {
+          items.item.pathData = `M ${o.from.x + at.dx} ${o.from.y + at.dy} L ${o.to.x + at.dx} ${o.to.y + at.dy}`;
+        }
+        return;
+      }
+      const centre = { x: o.at.x + at.dx, y: o.at.y + at.dy };
+      const p = items.item.position;
+      if (p.x !== centre.x || p.y !== centre.y) items.item.position = new this.scope.Point(centre.x, centre.y);
+      const t = items.text;
+      if (t) {
+        if (o.label && t.content !== o.label) t.content = o.label;
+        t.data = { px: LABEL_PX.point, anchor: centre };
+        this.sizeOverlayText(t);
+      }
+    });
+  }
+
+  private sizeOverlayText(t: paper.PointText): void {
+    const { px, anchor } = t.data as { px: number; anchor: Point };
+    if (t.fontSize !== px / this.scale) t.fontSize = px / this.scale;
+    const x = anchor.x + 8 / this.scale;
+    const y = anchor.y - 6 / this.scale;
+    const p = t.point;
+    if (p.x !== x || p.y !== y) t.point = new this.scope.Point(x, y);
+  }
+
+  /** Screen sizes of the overlay items (constant while zooming). */
+  private sizeOverlays(): void {
+    for (const { item, text } of this.overlayItems) {
+      const px = (item.data as { px?: number } | undefined)?.px;
+      if (px !== undefined && item instanceof this.scope.Shape && item.radius !== px / this.scale) item.radius = px / this.scale;
+      if (text) this.sizeOverlayText(text);
     }
   }
 }
