@@ -413,7 +413,7 @@ export function planFit(input: PlanInput): FitPlan {
       caution(
         `Size ${size} at the ${level} is beyond the printed sizes (${scale.sizes[0]!.size}–${scale.sizes[scale.sizes.length - 1]!.size}): it is extrapolated, an estimate. Sew a test garment first.`,
       );
-    if (stopped) caution(`At the ${level} even size ${size}, ${MAX_EXTRAPOLATION_STEPS} grade step beyond the table, misses by ${L(Math.abs(change))}: a girth change takes the rest. Large changes are estimates: sew a test garment first.`);
+    if (stopped && change !== 0) caution(`At the ${level} even size ${size}, ${MAX_EXTRAPOLATION_STEPS} grade step beyond the table, misses by ${L(Math.abs(change))}: a girth change takes the rest. Large changes are estimates: sew a test garment first.`);
     if (change > 0 && stretch === 0)
       caution(`Size ${size} is ${L(change)} too small at the ${level} in a cloth without stretch: that is uncomfortable to wear. Let it out, choose a larger size there, or use a cloth with stretch.`);
   }
@@ -435,7 +435,6 @@ export function planFit(input: PlanInput): FitPlan {
   const lengthenLines = pattern ? [...new Set(legPieces.flatMap((p) => p.lines.filter((l) => l.role === 'lengthen').map((l) => l.name)))] : [];
   const riseLine = pattern ? lengthenLines.find((n) => n === 'rise') : 'rise';
   const legLines = pattern ? lengthenLines.filter((n) => n !== 'rise') : ['lower leg'];
-  if (!pattern) caution('No pattern was given: the rise and leg length changes name the lines "rise" and "lower leg"; rename them to your pattern\'s lines.');
 
   // The pattern's crotch depth and inseam after the blend: measured on the blended pattern when
   // there is one (the blend decides where the crotch point lands), else read from the table at
@@ -500,6 +499,9 @@ export function planFit(input: PlanInput): FitPlan {
       }
     }
   }
+
+  if (!pattern && steps.some((st) => st.op.op === 'rise' || st.op.op === 'lengthen'))
+    caution('No pattern was given: the rise and leg length changes name the lines "rise" and "lower leg"; rename them to your pattern\'s lines.');
 
   // girth changes where the size still misses: on the side seams (§3.10: side seams first)
   for (const l of levels) {

@@ -60,6 +60,7 @@ describe('planFit: the practitioner\'s blend', () => {
     expect(plan.ops.filter((o) => o.op === 'girth')).toEqual([]); // every level lands on a size
     expect(plan.levels.every((l) => l.confidence === 'high')).toBe(true);
     expect(plan.cautions.join('\n')).toMatch(/no knee girth/);
+    expect(plan.cautions.join('\n')).not.toMatch(/No pattern was given/); // no rise or length change to name
   });
 });
 
@@ -86,6 +87,7 @@ describe('planFit: a raised waistband (issue 6 trade fact; common practice, no s
     expectNear(rise2.amount - rise0.amount, 2 * IN, 0.1, 'rise raised by 2 in');
     const hipSize = sizeNumber(raised.levels.find((l) => l.level === 'hip')!.size)!;
     expectNear(rise2.amount, 262 + ease.rise.mm + 2 * IN - (250 + 2.5 * hipSize), 0.06, 'rise amount');
+    expect(raised.cautions.join('\n')).toMatch(/No pattern was given: the rise and leg length changes name the lines "rise"/);
   });
 
   it('between measured heights the girth is interpolated (lower confidence); with none there the waist is left unplanned, never taken at the natural waist', () => {
