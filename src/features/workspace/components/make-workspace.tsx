@@ -1,5 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { flushSync } from 'react-dom';
 import { type AlterationOp, formatLength, type LengthUnit, type Pattern, type Point } from '../../../../geometry/index.ts';
 import { CalibrationPanel, type CanvasOverlay, type CanvasPick, type CanvasView, PatternCanvas, useCalibration } from '../../../components/pattern-canvas';
 import { Button } from '../../../components/ui/button';
@@ -139,7 +140,8 @@ export function MakeWorkspace({
         frame.raf = requestAnimationFrame(() => {
           dragFrame.current = null;
           const pattern = previewWith(dragPrefix, frame.op);
-          if (pattern) setDraft({ id: frame.id, op: frame.op, pattern });
+          // Rendered at once, inside this animation frame, so the new outline is painted in it.
+          if (pattern) flushSync(() => setDraft({ id: frame.id, op: frame.op, pattern }));
         });
         dragFrame.current = frame;
       } else {
