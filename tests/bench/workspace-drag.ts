@@ -111,7 +111,7 @@ export async function workspaceDragBench(): Promise<void> {
       })()`);
       await page.mouse.move(x, y);
       await page.mouse.down();
-      // Back and forth along the grain for about 3 s: one pointer move per animation frame, sent
+      // Up and down along the grain for about 3 s: one pointer move per animation frame, sent
       // from inside the page (the same pointer the real press captured), so the page, not the
       // test driver, sets the pace.
       const canvas = page.locator('canvas').first();
@@ -125,7 +125,9 @@ export async function workspaceDragBench(): Promise<void> {
           let n = 0;
           const step = (t) => {
             if (t - t0 > 3000) return resolve(n);
-            const y = ${y} + 60 * Math.sin(((n % 120) / 120) * 2 * Math.PI);
+            // A steady drag, 4 px a frame, down 60 px and back (a triangle wave): every frame asks for a new amount.
+            const phase = (n % 60) / 60;
+            const y = ${y} - 60 + 240 * Math.min(phase, 1 - phase);
             el.dispatchEvent(new PointerEvent('pointermove', { pointerId: 1, pointerType: 'mouse', isPrimary: true, buttons: 1, clientX: ${x}, clientY: y, bubbles: true }));
             n++;
             requestAnimationFrame(step);
