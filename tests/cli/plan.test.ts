@@ -60,17 +60,20 @@ describe('npx blockwright plan', () => {
     expect(plan.fit).toBe('close');
   });
 
-  it('when the fabric stretches 18 % across, then a waist size 1 in small needs no change; in rigid cloth it gets a girth change', () => {
+  it('when size 0 is chosen at the waist and it is 1 in small, then rigid denim gets a girth change and 18 % stretch denim none (issue 6 trade fact; common practice, no source)', () => {
     const profile = write('tight.json', { waistGirth: 700 + MM_PER_INCH - ease.waist.mm, hipGirth: 990 });
-    // a table with one size: the plan must use size 0 at the waist and say what it still misses
-    const only0 = write('only0.json', { sizes: [{ size: '0', garment: { waist: 700 } }] });
-    const rigid = cli('plan', '--profile', profile, '--chart', only0, '--fabric', write('rigid.json', { weightOzPerSqYd: 12 }));
+    const table = write('chart3.json', chart);
+    const rigid = cli('plan', '--profile', profile, '--chart', table, '--size', 'waist=0', '--fabric', write('rigid.json', { weightOzPerSqYd: 12 }));
     expect(rigid.status, rigid.stderr).toBe(0);
     const r = JSON.parse(rigid.stdout) as FitPlan;
+    expect(r.levels.find((l) => l.level === 'waist')!.size).toBe('0');
     expect(r.ops).toContainEqual({ op: 'girth', edge: 'side-seam', level: 'waist', amount: 6.4 });
-    const stretch = cli('plan', '--profile', profile, '--chart', only0, '--fabric', write('stretch.json', { weightOzPerSqYd: 12, stretchAcross: 18 }));
+    expect(r.cautions.join('\n')).toMatch(/uncomfortable/);
+    const stretch = cli('plan', '--profile', profile, '--chart', table, '--size', 'waist=0', '--fabric', write('stretch.json', { weightOzPerSqYd: 12, stretchAcross: 18 }));
     expect(stretch.status, stretch.stderr).toBe(0);
-    expect((JSON.parse(stretch.stdout) as FitPlan).ops.filter((o) => o.op === 'girth')).toEqual([]);
+    const s = JSON.parse(stretch.stdout) as FitPlan;
+    expect(s.levels.find((l) => l.level === 'waist')!.size).toBe('0');
+    expect(s.ops.filter((o) => o.op === 'girth')).toEqual([]);
   });
 
   it('when input is wrong, then a non-zero exit with one clear line on stderr', () => {
@@ -83,6 +86,7 @@ describe('npx blockwright plan', () => {
       [['--profile', write('bad-profile.json', { hipGirth: -1 }), '--chart', chartFile], /invalid profile: hipGirth: must be more than 0 mm/],
       [['--profile', profile, '--chart', chartFile, '--fit', 'snug'], /--fit must be one of close, regular, relaxed/],
       [['--profile', profile, '--chart', chartFile, '--waist-offset', 'high'], /--waist-offset must be millimetres or a length with its unit/],
+      [['--profile', profile, '--chart', chartFile, '--size', 'ankle=4'], /--size must be LEVEL=SIZE/],
       [['--profile', profile, '--chart', chartFile, '--fabric', write('bad-fabric.json', { weightGsm: 300, weightOzPerSqYd: 12 })], /invalid fabric: weightOzPerSqYd/],
       [['--profile', profile, '--chart', write('bad-chart.json', '{"sizes": [')], /not valid JSON/],
       [['--profile', profile, '--pattern', write('pocket.json', { units: 'mm', pieces: [{ name: 'pocket', outlines: [{ size: '8', d: 'M0 0 L100 0 L100 100 Z' }] }] })], /no leg pieces/],
@@ -93,7 +97,7 @@ describe('npx blockwright plan', () => {
       expect(res.stderr.trim().split('\n'), args.join(' ')).toHaveLength(1);
       expect(res.stderr, args.join(' ')).toMatch(message);
     }
-  }, 90_000); // nine processes, each starting tsx
+  }, 120_000); // ten processes, each starting tsx
 
   it('when asked for help, then the usage names the options', () => {
     const res = cli('plan', '--help');

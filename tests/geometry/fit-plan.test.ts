@@ -261,3 +261,24 @@ describe('planFit: beyond the table, lengths, fabric, bad input', () => {
     expect(plan.ops).toContainEqual({ op: 'blend', levels: [{ level: 'hip', size: 'L' }] });
   });
 });
+
+describe('ease defaults', () => {
+  it('match the inch values of EIC "Ease in Clothing" (trade reference §4.1 [C]) and AASD §9.4.3 seated-rise ease (§4.1 [C]); the rest are marked common practice or from memory', () => {
+    // EIC: skirts and pants ½–¾ in at the waist, waist ¾–1 in; seat 1½–2 in; hips 2–2¾ in for all garments; thigh at least 1 in.
+    expectNear(EASE_DEFAULTS.close.waist.mm, 0.5 * IN, 1e-9, 'EASE_DEFAULTS.close.waist.mm');
+    expectNear(EASE_DEFAULTS.regular.waist.mm, 0.75 * IN, 1e-9, 'EASE_DEFAULTS.regular.waist.mm');
+    expectNear(EASE_DEFAULTS.relaxed.waist.mm, 1 * IN, 1e-9, 'EASE_DEFAULTS.relaxed.waist.mm');
+    expectNear(EASE_DEFAULTS.close.hip.mm, 1.5 * IN, 1e-9, 'EASE_DEFAULTS.close.hip.mm');
+    expectNear(EASE_DEFAULTS.regular.hip.mm, 2 * IN, 1e-9, 'EASE_DEFAULTS.regular.hip.mm');
+    expectNear(EASE_DEFAULTS.relaxed.hip.mm, 2.75 * IN, 1e-9, 'EASE_DEFAULTS.relaxed.hip.mm');
+    expectNear(EASE_DEFAULTS.close.thigh.mm, 1 * IN, 1e-9, 'EASE_DEFAULTS.close.thigh.mm');
+    // AASD: 0–0.5 cm for women, 1–1.5 cm for men
+    expect([EASE_DEFAULTS.close.rise.mm, EASE_DEFAULTS.regular.rise.mm, EASE_DEFAULTS.relaxed.rise.mm]).toEqual([0, 5, 15]);
+    for (const fit of ['close', 'regular', 'relaxed'] as const)
+      for (const [level, e] of Object.entries(EASE_DEFAULTS[fit])) {
+        expect(e.source, `${fit} ${level}`).toMatch(/EIC|AASD|common practice, no source|from memory/);
+        // every fit is at least as loose as the one before it
+        if (fit !== 'close') expect(e.mm, `${fit} ${level}`).toBeGreaterThanOrEqual(EASE_DEFAULTS[fit === 'regular' ? 'close' : 'regular'][level as 'hip'].mm);
+      }
+  });
+});

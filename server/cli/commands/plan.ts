@@ -1,4 +1,4 @@
-import { FITS, LengthParseError, parseLength, planFit, type Fit } from '../../../geometry/index.ts';
+import { FITS, FIT_LEVELS, LengthParseError, parseLength, planFit, type Fit, type FitLevel } from '../../../geometry/index.ts';
 import { CliError, parseOptions, readJson, writeJson } from '../io.ts';
 import type { Command } from '../command.ts';
 
@@ -22,6 +22,18 @@ function numberOption(name: string, text: string | undefined): number | undefine
   return v;
 }
 
+/** `--size hip=8` (repeatable): a size the person has chosen at a level; the plan checks it. */
+function sizeOptions(texts: string[] | undefined): Partial<Record<FitLevel, string>> | undefined {
+  if (!texts || texts.length === 0) return undefined;
+  const out: Partial<Record<FitLevel, string>> = {};
+  for (const t of texts) {
+    const m = /^([a-z]+)=(.+)$/.exec(t.trim());
+    if (!m || !(FIT_LEVELS as readonly string[]).includes(m[1]!)) throw new CliError(`--size must be LEVEL=SIZE with LEVEL one of ${FIT_LEVELS.join(', ')}; got "${t}"`);
+    out[m[1] as FitLevel] = m[2]!.trim();
+  }
+  return out;
+}
+
 export const planCommand: Command = {
   name: 'plan',
   summary: 'plan the fit: a size per level and the alterations, from a profile and a pattern',
@@ -29,14 +41,16 @@ export const planCommand: Command = {
     'Usage: npx blockwright plan --profile p.json (--pattern pattern.json | --chart chart.json)',
     '         [--pattern pattern.json] [--fabric f.json] [--fit close|regular|relaxed]',
     '         [--waist-offset 2in] [--inseam-offset -3cm] [--stretch-share 0.5]',
-    '         [--seam-allowance 15] [--unit cm|in] [--out plan.json]',
+    '         [--seam-allowance 15] [--size waist=0 …] [--unit cm|in] [--out plan.json]',
     '',
     'Compares the body (profile, ISO 8559-1 names, mm) plus ease with the finished-garment',
     'measurements of each size (the size table, or measured on the pattern when none is given)',
     'and prints the plan as JSON: the size at each level with its reason and confidence, the',
     'alterations (blend, rise, lengthen, girth, shrinkage) ready for `npx blockwright alter`,',
     'and cautions. --waist-offset: where the waistband will sit above (+) or below (−) the',
-    'natural waist. Lengths in options are millimetres unless a unit is written.',
+    'natural waist. --size LEVEL=SIZE (repeatable): a size you have chosen at a level; the',
+    'plan checks it and suggests a girth change if it misses. Lengths in options are',
+    'millimetres unless a unit is written.',
     'Sizing advice is guidance, not a guarantee of fit: sew a test garment first.',
   ].join('\n'),
   async run(args, io) {
@@ -50,6 +64,7 @@ export const planCommand: Command = {
       'inseam-offset': { type: 'string' },
       'stretch-share': { type: 'string' },
       'seam-allowance': { type: 'string' },
+      size: { type: 'string', multiple: true },
       unit: { type: 'string' },
       out: { type: 'string' },
     });
@@ -62,6 +77,7 @@ export const planCommand: Command = {
     const inseamOffset = lengthOption('inseam-offset', values['inseam-offset']);
     const seamAllowance = lengthOption('seam-allowance', values['seam-allowance']);
     const stretchShare = numberOption('stretch-share', values['stretch-share']);
+    const sizes = sizeOptions(values.size);
     // read every file before any work, so a missing one is reported first
     const profile = readJson(values.profile);
     const pattern = values.pattern ? readJson(values.pattern) : undefined;
@@ -77,6 +93,7 @@ export const planCommand: Command = {
       ...(inseamOffset !== undefined ? { inseamOffset } : {}),
       ...(seamAllowance !== undefined ? { seamAllowance } : {}),
       ...(stretchShare !== undefined ? { stretchShare } : {}),
+      ...(sizes !== undefined ? { sizes } : {}),
       ...(values.unit !== undefined ? { unit: values.unit as 'cm' | 'in' } : {}),
     });
     writeJson(plan, values.out, io.stdout);
