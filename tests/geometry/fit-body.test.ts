@@ -17,6 +17,7 @@ import {
   stretchPercent,
 } from '../../geometry/index.ts';
 import { MEASUREMENT_NAMES } from '../../server/modules/profiles/profiles.schemas.ts';
+import { MEASUREMENT_NAMES as CLIENT_MEASUREMENT_NAMES } from '../../src/features/makes/measurement-names.ts';
 import { expectNear } from './helpers.ts';
 
 describe('units', () => {
@@ -46,8 +47,10 @@ describe('units', () => {
 });
 
 describe('body profile', () => {
-  it('keeps the same ISO 8559-1 keys as the server profile schema', () => {
+  it('keeps the same ISO 8559-1 keys as the server profile schema and the client\'s profile form', () => {
     expect([...BODY_MEASUREMENT_NAMES]).toEqual([...MEASUREMENT_NAMES]);
+    // The client keeps its own copy so the makes page does not load the engine.
+    expect([...BODY_MEASUREMENT_NAMES]).toEqual([...CLIENT_MEASUREMENT_NAMES]);
   });
 
   it('reads the flat form and the stored { measurements } form alike', () => {

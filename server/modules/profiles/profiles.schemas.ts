@@ -1,23 +1,12 @@
 import { z } from 'zod';
+import { BODY_MEASUREMENT_NAMES, type BodyMeasurementName } from '../../../geometry/index.ts';
 
 /**
  * Body measurements a profile keeps, in millimetres. Names follow ISO 8559-1 (body dimensions
  * for clothing); the fit planner will add dated history and girths at chosen heights.
  */
-export const MEASUREMENT_NAMES = [
-  'waistGirth',
-  'hipGirth',
-  'thighGirth',
-  'kneeGirth',
-  'calfGirth',
-  'ankleGirth',
-  'bodyRise',
-  'totalCrotchLength',
-  'insideLegLength',
-  'outsideLegLength',
-  'height',
-] as const;
-export type MeasurementName = (typeof MEASUREMENT_NAMES)[number];
+export const MEASUREMENT_NAMES = BODY_MEASUREMENT_NAMES;
+export type MeasurementName = BodyMeasurementName;
 
 const measurement = z.number({ error: 'must be a number of millimetres' }).positive('must be more than 0 mm').max(3000, 'must be 3 m or less');
 

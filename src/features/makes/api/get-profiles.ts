@@ -3,21 +3,8 @@ import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { profileKeys } from '../query-keys';
 
-/** Body measurements in millimetres, by their ISO 8559-1 names. */
-export const MEASUREMENT_NAMES = [
-  'waistGirth',
-  'hipGirth',
-  'thighGirth',
-  'kneeGirth',
-  'calfGirth',
-  'ankleGirth',
-  'bodyRise',
-  'totalCrotchLength',
-  'insideLegLength',
-  'outsideLegLength',
-  'height',
-] as const;
-export type MeasurementName = (typeof MEASUREMENT_NAMES)[number];
+export { MEASUREMENT_NAMES, type MeasurementName } from '../measurement-names';
+import type { MeasurementName } from '../measurement-names';
 export type Measurements = Partial<Record<MeasurementName, number>>;
 
 export const profileSchema = z.object({

@@ -1,19 +1,7 @@
 import { z } from 'zod';
-import type { AlterationEntry } from '../../../../geometry/make';
+import { revisionSchema } from '../../../types/make-revision';
 
-/**
- * The shapes of makes as the API sends them. Alterations are checked only for their frame (an
- * id, the on/off switch and an `op` name); the geometry engine checks the rest where it replays them.
- */
-const alterationEntrySchema = z.custom<AlterationEntry>(
-  (value) =>
-    typeof value === 'object' &&
-    value !== null &&
-    typeof (value as { id?: unknown }).id === 'string' &&
-    typeof (value as { op?: { op?: unknown } }).op?.op === 'string',
-  'An alteration the page does not understand.',
-);
-
+/** The shapes of makes as the API sends them. */
 export const makeSummarySchema = z.object({
   id: z.string(),
   name: z.string(),
@@ -29,20 +17,7 @@ export const makeSummarySchema = z.object({
 });
 export type MakeSummary = z.infer<typeof makeSummarySchema>;
 
-export const revisionSummarySchema = z.object({
-  number: z.number(),
-  summary: z.string(),
-  author: z.object({ id: z.string(), displayName: z.string() }).nullable(),
-  restoredFrom: z.number().nullable(),
-  alterationCount: z.number(),
-  createdAt: z.string(),
-});
-export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
-
-export const revisionSchema = revisionSummarySchema.extend({
-  alterations: z.array(alterationEntrySchema),
-});
-export type Revision = z.infer<typeof revisionSchema>;
+export { revisionSchema, revisionSummarySchema, type Revision, type RevisionSummary } from '../../../types/make-revision';
 
 export const makeDetailSchema = makeSummarySchema.extend({ revision: revisionSchema });
 export type MakeDetail = z.infer<typeof makeDetailSchema>;

@@ -1,0 +1,19 @@
+/**
+ * Body measurements in millimetres, by their ISO 8559-1 names: the server's profile keys
+ * (geometry/fit/body.ts BODY_MEASUREMENT_NAMES). A copy, so the makes page does not load the
+ * engine; tests/geometry/fit-body.test.ts checks the two agree.
+ */
+export const MEASUREMENT_NAMES = [
+  'waistGirth',
+  'hipGirth',
+  'thighGirth',
+  'kneeGirth',
+  'calfGirth',
+  'ankleGirth',
+  'bodyRise',
+  'totalCrotchLength',
+  'insideLegLength',
+  'outsideLegLength',
+  'height',
+] as const;
+export type MeasurementName = (typeof MEASUREMENT_NAMES)[number];
