@@ -3,9 +3,8 @@
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { applyOps, contourLength, demoPattern, outlineContour, parsePattern } from '../../geometry/index.ts';
 import { readPdf } from '../print/pdf-reader.ts';
 import { PassThrough } from 'node:stream';
@@ -13,21 +12,9 @@ import { exportCommand } from '../../server/cli/commands/export.ts';
 import { BLEND } from '../bench/alterations.ts';
 import { writeD6673 } from '../geometry/d6673-writer.ts';
 import { projectRoot } from '../../server/config.ts';
+import { BIN, cliScratch } from '../support/cli.ts';
 
-const BIN = path.join(projectRoot, 'server/cli/blockwright.mjs');
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'blockwright-cli-'));
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
-
-function cli(...args: string[]) {
-  const res = spawnSync(process.execPath, [BIN, ...args], { cwd: dir, encoding: 'utf8' });
-  return { status: res.status, stdout: res.stdout, stderr: res.stderr };
-}
-
-function write(name: string, value: unknown): string {
-  const file = path.join(dir, name);
-  fs.writeFileSync(file, typeof value === 'string' ? value : JSON.stringify(value));
-  return file;
-}
+const { dir, cli, write } = cliScratch('blockwright-cli-');
 
 interface Measures {
   pieces: { piece: string; outlines: { size: string; edges: { role: string; length: number }[] }[] }[];

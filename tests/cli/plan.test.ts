@@ -2,28 +2,13 @@
  * `npx blockwright plan`, run as a real process through its bin file.
  * The bodies and tables are invented for the tests.
  */
-import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { EASE_DEFAULTS, MM_PER_INCH, applyOps, demoPattern, parsePattern, type FitPlan } from '../../geometry/index.ts';
-import { projectRoot } from '../../server/config.ts';
+import { cliScratch } from '../support/cli.ts';
 
-const BIN = path.join(projectRoot, 'server/cli/blockwright.mjs');
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'blockwright-plan-'));
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
-
-function cli(...args: string[]) {
-  const res = spawnSync(process.execPath, [BIN, ...args], { cwd: dir, encoding: 'utf8' });
-  return { status: res.status, stdout: res.stdout, stderr: res.stderr };
-}
-
-function write(name: string, value: unknown): string {
-  const file = path.join(dir, name);
-  fs.writeFileSync(file, typeof value === 'string' ? value : JSON.stringify(value));
-  return file;
-}
+const { dir, cli, write } = cliScratch('blockwright-plan-');
 
 const chart = {
   sizes: [0, 2, 4, 6, 8, 10, 12].map((s) => ({ size: String(s), garment: { waist: 700 + 20 * s, hip: 950 + 20 * s, thigh: 560 + 10 * s, calf: 360 + 5 * s } })),
