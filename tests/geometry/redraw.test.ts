@@ -45,6 +45,33 @@ const point = fc.record({ x: coord, y: coord });
  */
 const BETWEEN_CHECKS = 0.05 * REDRAW_TOLERANCE;
 
+/**
+ * The redrawn outline `after` against the exact image of `before` under `map`, both ways: dense
+ * points of the original curve (every 0.25 mm or closer) mapped exactly, with the chord error of
+ * that sampled image (midpoints against their chords), and `after` flattened to 1e-4 mm.
+ */
+function expectRedrawnWithin(before: Contour, map: (p: Point) => Point, after: Contour): void {
+  const image: Point[] = [];
+  let chordError = 0;
+  for (const seg of before.segments) {
+    const n = Math.max(8, Math.ceil(segmentLength(seg) / 0.25));
+    for (let i = 0; i < n; i++) {
+      const a = map(segmentPoint(seg, i / n));
+      const b = map(segmentPoint(seg, (i + 1) / n));
+      chordError = Math.max(chordError, distanceToPolyline(map(segmentPoint(seg, (i + 0.5) / n)), [a, b]));
+      image.push(a);
+    }
+  }
+  image.push(image[0]!);
+  const redrawn = contourFlatten(after, 1e-4).map((f) => f.point);
+  redrawn.push(redrawn[0]!);
+  const slack = REDRAW_TOLERANCE + BETWEEN_CHECKS + 1e-6 + 1e-9;
+  const toRedrawn = nearPolyline(redrawn, 1);
+  const toImage = nearPolyline(image, 1);
+  for (const p of image) expect(toRedrawn(p)).toBeLessThanOrEqual(slack + 1e-4);
+  for (const p of redrawn) expect(toImage(p)).toBeLessThanOrEqual(slack + chordError);
+}
+
 /** Distance from p to a polyline. */
 function distanceToPolyline(p: Point, poly: readonly Point[]): number {
   let best = Infinity;
@@ -233,28 +260,7 @@ describe('girth redraw against the exact displaced outline', () => {
           const field = girthReference(demo, pieceName, size, edge, level, amount, above, below);
           const before = outlineContour(demo.pieces.find((p) => p.name === pieceName)!.outlines.find((o) => o.size === size)!);
           const after = outlineContour(out.pieces.find((p) => p.name === pieceName)!.outlines.find((o) => o.size === size)!);
-          // dense points of the original curve (every 0.25 mm or closer), displaced exactly, and
-          // the chord error of that sampled image (midpoints against their chords)
-          const image: Point[] = [];
-          let chordError = 0;
-          for (const seg of before.segments) {
-            const n = Math.max(8, Math.ceil(segmentLength(seg) / 0.25));
-            for (let i = 0; i < n; i++) {
-              const a = field(segmentPoint(seg, i / n));
-              const b = field(segmentPoint(seg, (i + 1) / n));
-              const mid = field(segmentPoint(seg, (i + 0.5) / n));
-              chordError = Math.max(chordError, distanceToPolyline(mid, [a, b]));
-              image.push(a);
-            }
-          }
-          image.push(image[0]!);
-          const redrawn = contourFlatten(after, 1e-4).map((f) => f.point);
-          redrawn.push(redrawn[0]!);
-          const slack = REDRAW_TOLERANCE + BETWEEN_CHECKS + 1e-6 + 1e-9;
-          const toRedrawn = nearPolyline(redrawn, 1);
-          const toImage = nearPolyline(image, 1);
-          for (const p of image) expect(toRedrawn(p)).toBeLessThanOrEqual(slack + 1e-4);
-          for (const p of redrawn) expect(toImage(p)).toBeLessThanOrEqual(slack + chordError);
+          expectRedrawnWithin(before, field, after);
         },
       ),
       { numRuns: 15 },
@@ -305,25 +311,7 @@ describe('slash-spread redraw against the exact wedge map', () => {
         const side = ray.x * -g.y - ray.y * -g.x >= 0 ? 1 : -1;
         const map = wedgeReference(from, hinge, wedgeAngle(amount, Math.hypot(ray.x, ray.y)), side, zone);
         const after = outlineContour(out.pieces.find((p) => p.name === 'front')!.outlines[0]!);
-        const image: Point[] = [];
-        let chordError = 0;
-        for (const seg of contour.segments) {
-          const n = Math.max(8, Math.ceil(segmentLength(seg) / 0.25));
-          for (let i = 0; i < n; i++) {
-            const a = map(segmentPoint(seg, i / n));
-            const b = map(segmentPoint(seg, (i + 1) / n));
-            chordError = Math.max(chordError, distanceToPolyline(map(segmentPoint(seg, (i + 0.5) / n)), [a, b]));
-            image.push(a);
-          }
-        }
-        image.push(image[0]!);
-        const redrawn = contourFlatten(after, 1e-4).map((f) => f.point);
-        redrawn.push(redrawn[0]!);
-        const slack = REDRAW_TOLERANCE + BETWEEN_CHECKS + 1e-6 + 1e-9;
-        const toRedrawn = nearPolyline(redrawn, 1);
-        const toImage = nearPolyline(image, 1);
-        for (const p of image) expect(toRedrawn(p)).toBeLessThanOrEqual(slack + 1e-4);
-        for (const p of redrawn) expect(toImage(p)).toBeLessThanOrEqual(slack + chordError);
+        expectRedrawnWithin(contour, map, after);
       }),
       { numRuns: 12 },
     );
