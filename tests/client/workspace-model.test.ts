@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { type AlterationEntry, applyOps, demoPattern, replayAlterations } from '../../geometry/index.ts';
-import { describeIntent, describeOp } from '../../src/features/workspace/model/describe.ts';
+import { describeIntent, describeOp, inUnits } from '../../src/features/workspace/model/describe.ts';
 import { amountAt, amountHandle, handlePoint } from '../../src/features/workspace/model/handles.ts';
 import { applyIntent, type Intent, invertIntent, newEntryId } from '../../src/features/workspace/model/intents.ts';
 import { measureRows, pairedSeams } from '../../src/features/workspace/model/measurements.ts';
@@ -67,6 +67,12 @@ describe('alterations in words, in the person\'s units', () => {
     expect(describeOp({ op: 'rise', line: 'rise', amount: 50.8 }, 'in')).toBe('Raise the rise by 2 in');
     expect(describeOp({ op: 'lengthen', line: 'lower leg', amount: 25 }, 'cm')).toBe('Lengthen at “lower leg” by 2.5 cm');
     expect(describeIntent({ kind: 'toggle', id: 'a', enabled: false }, [entry('a', -76.2)], 'in')).toBe('Switched off: Shorten at “lower leg” by 3 in');
+  });
+
+  it('shows the engine\'s millimetres in the person\'s units (25.4 mm per inch)', () => {
+    expect(inUnits('a lengthen of -76.2 mm is a large change', 'in')).toBe('a lengthen of -3 in is a large change');
+    expect(inUnits('an opening of 400 mm is more than the slash (350.5 mm) can open', 'cm')).toBe('an opening of 40 cm is more than the slash (35.1 cm) can open');
+    expect(inUnits('piece "front" has no line named "lower leg"', 'in')).toBe('piece "front" has no line named "lower leg"');
   });
 });
 

@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import type { AlterationEntry, AppliedCaution, LengthUnit } from '../../../../geometry/index.ts';
 import { cx } from '../../../lib/cx';
-import { describeOp } from '../model/describe';
+import { describeOp, inUnits } from '../model/describe';
 import type { Intent } from '../model/intents';
 
 /**
@@ -59,12 +59,12 @@ export const AlterationList = memo(function AlterationList({
             </div>
             {error?.id === entry.id && (
               <p role="alert" className="mt-1 text-sm font-medium text-madder-700">
-                {error.message}
+                {inUnits(error.message, unit)}
               </p>
             )}
             {own.map((c, i) => (
               <p key={i} className="mt-1 text-xs text-chalk-700">
-                {c.message}
+                {inUnits(c.message, unit)}
               </p>
             ))}
             <div className="mt-1 flex flex-wrap gap-1 text-xs">

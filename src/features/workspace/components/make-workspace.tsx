@@ -9,7 +9,7 @@ import type { WorkspaceMake } from '../api/schemas';
 import type { WorkspacePattern } from '../api/get-pattern';
 import { useRevision } from '../api/get-revisions';
 import { amountAt, amountHandle, handlePoint, hasAmountHandle } from '../model/handles';
-import { describeOp } from '../model/describe';
+import { describeOp, inUnits } from '../model/describe';
 import { newEntryId } from '../model/intents';
 import { previewWith, prefixFor, replaySafely } from '../model/replay';
 import { workspaceKeys } from '../query-keys';
@@ -266,7 +266,7 @@ export function MakeWorkspace({
           />
           {committed.cautions.length > 0 && (
             <ul aria-label="Cautions" className="flex flex-col gap-1">
-              {[...new Set(committed.cautions.map((c) => c.message))].map((m) => (
+              {[...new Set(committed.cautions.map((c) => inUnits(c.message, unit)))].map((m) => (
                 <li key={m} className="rounded-md border border-tape-400 bg-tape-100 px-3 py-1 text-sm text-ink-900">
                   {m}
                 </li>

@@ -14,6 +14,7 @@ import type { CanvasPick } from '../../../components/pattern-canvas';
 import { Button } from '../../../components/ui/button';
 import { LengthField } from '../../../components/ui/length-field';
 import { cx } from '../../../lib/cx';
+import { inUnits } from '../model/describe';
 
 export const TOOLS = [
   { id: 'length', label: 'Lengthen / shorten' },
@@ -87,7 +88,7 @@ function Submit({ ctx, op, addLabel }: { ctx: ToolContext; op: AlterationOp | un
         onClick={() => {
           if (!op) return;
           const message = ctx.submit(op);
-          setRefused(message ? { key, message } : null);
+          setRefused(message ? { key, message: inUnits(message, ctx.unit) } : null);
         }}
       >
         {ctx.editing ? 'Update the alteration' : addLabel}
@@ -200,7 +201,7 @@ function MarkTool({ ctx }: { ctx: ToolContext }) {
   const [role, setRole] = useState<'lengthen' | 'level'>('lengthen');
   const [name, setName] = useState('');
   const [message, setMessage] = useState<string | null>(null);
-  const { listen, submit } = ctx;
+  const { listen, submit, unit } = ctx;
   useEffect(() => {
     if (!name.trim()) {
       listen(null);
@@ -212,10 +213,10 @@ function MarkTool({ ctx }: { ctx: ToolContext }) {
         return;
       }
       const refused = submit({ op: 'mark-line', piece: pick.piece, role, name: name.trim(), at: pick.point });
-      setMessage(refused ?? `Marked “${name.trim()}” on ${pick.piece}. Click another piece to mark it there too.`);
+      setMessage(refused ? inUnits(refused, unit) : `Marked “${name.trim()}” on ${pick.piece}. Click another piece to mark it there too.`);
     }, `Click a piece where “${name.trim()}” goes: the line is drawn square to the grainline.`);
     return () => listen(null);
-  }, [listen, submit, name, role]);
+  }, [listen, submit, name, role, unit]);
   return (
     <div className="flex flex-col gap-3">
       <p className="text-sm text-ink-700">Mark a line the printed pattern lacks. It is drawn square to the grainline across the piece; mark the same name on front and back to alter them together.</p>

@@ -55,3 +55,11 @@ export function describeIntent(intent: Intent, before: readonly AlterationEntry[
       return intent.restoredFrom !== undefined ? `Restored revision ${intent.restoredFrom}` : 'Replaced the alteration list';
   }
 }
+
+/**
+ * The engine's messages speak millimetres ("a lengthen of -76.2 mm is a large change"); show
+ * each length in the person's units instead. Only "<number> mm" is touched.
+ */
+export function inUnits(message: string, unit: LengthUnit): string {
+  return message.replace(/(-?\d+(?:\.\d+)?) mm\b/g, (_, n: string) => formatLength(Number(n), unit));
+}
