@@ -39,6 +39,7 @@ const routes: Array<['post' | 'patch', string]> = [
   ['patch', '/api/makes/:makeId'],
   ['post', '/api/makes/:makeId/duplicate'],
   ['post', '/api/makes/:makeId/revisions'],
+  ['post', '/api/makes/:makeId/plan'],
   ['post', '/api/profiles'],
   ['patch', '/api/profiles/:profileId'],
 ];

@@ -247,3 +247,37 @@ describe('profiles and units', () => {
     await ada.send('patch', '/api/account', { units: 'in' });
   });
 });
+
+describe('the fit plan of a make', () => {
+  it('when Ada asks for the plan of her make, then it has a size per level and alterations the engine accepts as a revision', async () => {
+    const seeded = ((await ada.get('/api/makes').expect(200)).body.makes as MakeDto[]).find((m) => m.name === 'Everyday jeans')!;
+    const res = await ada.send('post', `/api/makes/${seeded.id}/plan`, { fabric: { stretchAcross: 2, weightOzPerSqYd: 12 }, options: { fit: 'regular' } });
+    expect(res.status).toBe(200);
+    const plan = res.body.plan as { levels: { level: string; size: string; reason: string }[]; ops: { op: string }[] };
+    expect(plan.levels.map((l) => l.level)).toEqual(expect.arrayContaining(['waist', 'hip', 'thigh']));
+    for (const l of plan.levels) expect(l.reason.length).toBeGreaterThan(10);
+    expect(plan.ops.some((o) => o.op === 'blend')).toBe(true);
+    // Accepting it: the plan's operations saved as the make's list (the server replays them).
+    const detail = (await ada.get(`/api/makes/${seeded.id}`).expect(200)).body.make as MakeDto;
+    const accepted = await ada.send('post', `/api/makes/${seeded.id}/revisions`, {
+      baseRevision: detail.latestRevision,
+      alterations: plan.ops.map((op, i) => ({ id: `plan-${i}`, enabled: true, op })),
+      summary: 'Accepted the fit plan',
+    });
+    expect(accepted.status).toBe(201);
+  });
+
+  it('when the make has no profile, the options are wrong, or it is someone else\'s, then 409 / 400 / 403', async () => {
+    const make = await newMake(ada, 'No profile');
+    const none = await ada.send('post', `/api/makes/${make.id}/plan`, {});
+    expect(none.status).toBe(409);
+    expect(none.body.error.message).toMatch(/no measurement profile/);
+    const seeded = ((await ada.get('/api/makes').expect(200)).body.makes as MakeDto[]).find((m) => m.name === 'Everyday jeans')!;
+    const bad = await ada.send('post', `/api/makes/${seeded.id}/plan`, { options: { fit: 'baggy' } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('invalid_input');
+    expect((await ada.send('post', `/api/makes/${seeded.id}/plan`, { colour: 'blue' })).status).toBe(400);
+    expect((await rui.send('post', `/api/makes/${seeded.id}/plan`, {})).status).toBe(403);
+    expect((await anon.send('post', `/api/makes/${seeded.id}/plan`, {})).status).toBe(401);
+  });
+});

@@ -6,6 +6,7 @@ import {
   createMakeSchema,
   duplicateMakeSchema,
   listMakesQuerySchema,
+  planRequestSchema,
   revisionParamsSchema,
   saveRevisionSchema,
   updateMakeSchema,
@@ -44,6 +45,12 @@ export function makesRouter(deps: { makes: MakesService }): Router {
     const { name } = parseInput(duplicateMakeSchema, req.body, 'duplicate');
     const make = await deps.makes.duplicate(currentUser(req), id, name);
     res.status(201).location(`/api/makes/${make.id}`).json({ make });
+  });
+
+  router.post('/:id/plan', async (req, res) => {
+    const { id } = parseInput(idParamsSchema, req.params, 'address');
+    const input = parseInput(planRequestSchema, req.body, 'plan request');
+    res.json({ plan: await deps.makes.plan(currentUser(req), id, input) });
   });
 
   router.get('/:id/revisions', async (req, res) => {

@@ -49,3 +49,11 @@ export const revisionParamsSchema = z.object({
   id: z.uuid({ error: 'Not a valid id.' }),
   number: z.coerce.number({ error: 'Not a revision number.' }).int('Not a revision number.').min(1, 'Not a revision number.'),
 });
+
+/** Fabric and planner options (geometry/fit checks them in detail). */
+export const planRequestSchema = z
+  .object({
+    fabric: z.record(z.string(), z.unknown()).optional(),
+    options: z.record(z.string(), z.unknown()).default({}),
+  })
+  .strict();

@@ -1,5 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { type AlterationEntry, AlterationListError, type Pattern, alterationEntriesSchema, replayAlterations } from '../../../geometry/index.ts';
+import { type AlterationEntry, AlterationListError, type FitPlan, FitInputError, type Pattern, alterationEntriesSchema, planFit, replayAlterations } from '../../../geometry/index.ts';
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import type { Actor, PatternsService } from '../patterns/patterns.service.ts';
 import { ProfileEntity } from '../profiles/profile.entity.ts';
@@ -169,6 +169,25 @@ export class MakesService {
       return { pattern: replayAlterations(pattern, revision.alterations).pattern, makeName: make.name };
     } catch (e) {
       if (e instanceof AlterationListError) throw new AppError('unprocessable', `This make's alterations cannot be applied to its pattern now: ${e.message}`, 422);
+      throw e;
+    }
+  }
+
+  /**
+   * The fit plan for this make: its profile's body against its pattern's finished measurements
+   * (measured from the pattern's geometry), with the fabric and options given. Nothing is saved:
+   * the person accepts the plan's alterations into the list as a revision.
+   */
+  async plan(actor: Actor & { units?: 'in' | 'cm' }, id: string, input: { fabric?: unknown; options: Record<string, unknown> }): Promise<FitPlan> {
+    const make = await this.load(actor, id);
+    if (!make.profileId) throw new AppError('conflict', 'This make has no measurement profile: choose one before planning.', 409);
+    const profile = await this.db.getRepository(ProfileEntity).findOneBy({ id: make.profileId });
+    if (!profile) throw new AppError('conflict', 'This make has no measurement profile: choose one before planning.', 409);
+    const { pattern } = await this.patterns.loadVisible(actor, make.patternId);
+    try {
+      return planFit({ unit: actor.units ?? 'cm', ...input.options, profile: { name: profile.name, measurements: profile.measurements }, pattern, ...(input.fabric !== undefined ? { fabric: input.fabric } : {}) });
+    } catch (e) {
+      if (e instanceof FitInputError) throw new AppError('invalid_input', `The plan cannot be made: ${e.message}`, 400, { plan: e.message });
       throw e;
     }
   }
