@@ -26,6 +26,8 @@ import { MakesService } from './modules/makes/makes.service.ts';
 import { patternsRouter } from './modules/patterns/patterns.router.ts';
 import { PatternsService } from './modules/patterns/patterns.service.ts';
 import { printsRouter } from './modules/prints/prints.router.ts';
+import { fabricsRouter } from './modules/fabrics/fabrics.router.ts';
+import { FabricsService } from './modules/fabrics/fabrics.service.ts';
 import { profilesRouter } from './modules/profiles/profiles.router.ts';
 import { ProfilesService } from './modules/profiles/profiles.service.ts';
 import { PrintsService } from './modules/prints/prints.service.ts';
@@ -116,6 +118,7 @@ export function createApp(deps: AppDeps): Express {
   const makes = new MakesService(deps.db, patterns);
   api.use('/patterns', patternsRouter({ patterns }));
   api.use('/profiles', profilesRouter({ profiles: new ProfilesService(deps.db) }));
+  api.use('/fabrics', fabricsRouter({ fabrics: new FabricsService(deps.db) }));
   api.use('/makes', makesRouter({ makes }));
   api.use('/prints', printsRouter({ prints: new PrintsService(deps.db, deps.jobs, makes) }));
   api.use(apiNotFound);

@@ -10,9 +10,11 @@ import { PatternEntity } from './modules/patterns/pattern.entity.ts';
 import { ProfileEntity } from './modules/profiles/profile.entity.ts';
 import { MakeEntity } from './modules/makes/make.entity.ts';
 import { MakeRevisionEntity } from './modules/makes/make-revision.entity.ts';
+import { Fabrics1764892800000 } from './migrations/1764892800000-Fabrics.ts';
+import { FabricEntity } from './modules/fabrics/fabric.entity.ts';
 
-export const entities = [UserEntity, PasswordResetTokenEntity, PrintJobEntity, PatternEntity, ProfileEntity, MakeEntity, MakeRevisionEntity];
-export const migrations = [Foundation1764633600000, PrintJobs1764720000000, Workspace1764806400000];
+export const entities = [UserEntity, PasswordResetTokenEntity, PrintJobEntity, PatternEntity, ProfileEntity, MakeEntity, MakeRevisionEntity, FabricEntity];
+export const migrations = [Foundation1764633600000, PrintJobs1764720000000, Workspace1764806400000, Fabrics1764892800000];
 
 /** The app's DataSource. Schema changes go through migrations only (`synchronize` is off). */
 export function createDataSource(url: string): DataSource {

@@ -20,6 +20,7 @@ beforeAll(async () => {
   ids.patternId = (await admin.upload('/api/patterns', { name: 'p.json', content: JSON.stringify(demoPattern()) })).body.pattern.id;
   ids.makeId = (await admin.send('post', '/api/makes', { name: 'fuzz', patternId: ids.patternId })).body.make.id;
   ids.profileId = (await admin.send('post', '/api/profiles', { name: 'fuzz' })).body.profile.id;
+  ids.fabricId = (await admin.send('post', '/api/fabrics', { name: 'fuzz' })).body.fabric.id;
 });
 afterAll(async () => {
   await t.close();
@@ -42,6 +43,8 @@ const routes: Array<['post' | 'patch', string]> = [
   ['post', '/api/makes/:makeId/plan'],
   ['post', '/api/profiles'],
   ['patch', '/api/profiles/:profileId'],
+  ['post', '/api/fabrics'],
+  ['patch', '/api/fabrics/:fabricId'],
 ];
 
 /** Alteration lists shaped like real ones, with any numbers (huge, tiny, negative) and names. */
@@ -87,6 +90,8 @@ const body = fc.oneof(
       alterations: fc.oneof(fc.array(alteration, { maxLength: 4 }), fc.jsonValue()),
       summary: fc.oneof(fc.constant('fuzzed'), fc.jsonValue()),
       restoredFrom: fc.jsonValue(),
+      properties: fc.oneof(fc.record({ stretchAcross: amount, weightGsm: amount, weightOzPerSqYd: amount }, { requiredKeys: [] }), fc.jsonValue()),
+      fabricId: fc.oneof(fc.constant('$fabricId'), fc.jsonValue()),
     },
     { requiredKeys: [] },
   ),

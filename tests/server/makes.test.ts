@@ -281,3 +281,40 @@ describe('the fit plan of a make', () => {
     expect((await anon.send('post', `/api/makes/${seeded.id}/plan`, {})).status).toBe(401);
   });
 });
+
+describe('fabrics', () => {
+  it('when a sewist keeps a fabric, then it is private, validated by the planner\'s rules, and a plan can use it', async () => {
+    const created = await ada.send('post', '/api/fabrics', {
+      name: 'Stretch denim',
+      properties: { stretchAcross: 18, weightOzPerSqYd: 11, width: 1500, shrinkage: { warp: 3, weft: 2 } },
+    });
+    expect(created.status).toBe(201);
+    const id = created.body.fabric.id as string;
+    expect(created.headers.location).toBe(`/api/fabrics/${id}`);
+    expect(((await ada.get('/api/fabrics').expect(200)).body.fabrics as { id: string }[]).map((f) => f.id)).toContain(id);
+    expect((await rui.get(`/api/fabrics/${id}`)).status).toBe(403);
+    expect((await rui.send('patch', `/api/fabrics/${id}`, { name: 'x' })).status).toBe(403);
+    expect((await rui.send('delete', `/api/fabrics/${id}`)).status).toBe(403);
+    expect((await anon.get('/api/fabrics')).status).toBe(401);
+
+    // 1 oz/yd² = 33.906 g/m² (exact definitions of the ounce and the yard): 11 oz/yd² is 373 g/m², not 200.
+    const mismatch = await ada.send('post', '/api/fabrics', { name: 'x', properties: { weightGsm: 200, weightOzPerSqYd: 11 } });
+    expect(mismatch.status).toBe(400);
+    expect(Object.keys(mismatch.body.error.fields).join()).toMatch(/properties\.weightOzPerSqYd/);
+    expect((await ada.send('post', '/api/fabrics', { name: 'x', properties: { stretchAcross: 'lots' } })).status).toBe(400);
+    expect((await ada.send('post', '/api/fabrics', { properties: {} })).body.error.fields.name).toBeDefined();
+
+    const seeded = ((await ada.get('/api/makes').expect(200)).body.makes as MakeDto[]).find((m) => m.name === 'Everyday jeans')!;
+    const plan = await ada.send('post', `/api/makes/${seeded.id}/plan`, { fabricId: id, options: { fit: 'close' } });
+    expect(plan.status).toBe(200);
+    // The wash test's shrinkage is compensated: the plan ends with a shrinkage operation.
+    expect((plan.body.plan.ops as { op: string }[]).some((o) => o.op === 'shrinkage')).toBe(true);
+    const ruis = await rui.send('post', '/api/fabrics', { name: 'Linen', properties: {} });
+    expect((await ada.send('post', `/api/makes/${seeded.id}/plan`, { fabricId: ruis.body.fabric.id })).status).toBe(403);
+    expect((await ada.send('post', `/api/makes/${seeded.id}/plan`, { fabricId: id, fabric: {} })).status).toBe(400);
+
+    expect((await ada.send('patch', `/api/fabrics/${id}`, { properties: { stretchAcross: 2 } })).body.fabric.properties).toEqual({ stretchAcross: 2 });
+    expect((await ada.send('delete', `/api/fabrics/${id}`)).status).toBe(204);
+    expect((await ada.get(`/api/fabrics/${id}`)).status).toBe(404);
+  });
+});

@@ -54,6 +54,9 @@ export const revisionParamsSchema = z.object({
 export const planRequestSchema = z
   .object({
     fabric: z.record(z.string(), z.unknown()).optional(),
+    /** One of the person's kept fabrics, in place of `fabric`. */
+    fabricId: z.uuid({ error: 'Not a valid fabric id.' }).optional(),
     options: z.record(z.string(), z.unknown()).default({}),
   })
-  .strict();
+  .strict()
+  .refine((v) => v.fabric === undefined || v.fabricId === undefined, { message: 'Send fabric or fabricId, not both.', path: ['fabricId'] });

@@ -2,6 +2,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { type AlterationEntry, AlterationListError, type FitPlan, FitInputError, type Pattern, alterationEntriesSchema, planFit, replayAlterations } from '../../../geometry/index.ts';
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import type { Actor, PatternsService } from '../patterns/patterns.service.ts';
+import { FabricEntity } from '../fabrics/fabric.entity.ts';
 import { ProfileEntity } from '../profiles/profile.entity.ts';
 import { UserEntity } from '../users/user.entity.ts';
 import { MakeRevisionEntity } from './make-revision.entity.ts';
@@ -178,14 +179,21 @@ export class MakesService {
    * (measured from the pattern's geometry), with the fabric and options given. Nothing is saved:
    * the person accepts the plan's alterations into the list as a revision.
    */
-  async plan(actor: Actor & { units?: 'in' | 'cm' }, id: string, input: { fabric?: unknown; options: Record<string, unknown> }): Promise<FitPlan> {
+  async plan(actor: Actor & { units?: 'in' | 'cm' }, id: string, input: { fabric?: unknown; fabricId?: string; options: Record<string, unknown> }): Promise<FitPlan> {
     const make = await this.load(actor, id);
+    let fabric = input.fabric;
+    if (input.fabricId !== undefined) {
+      const kept = await this.db.getRepository(FabricEntity).findOneBy({ id: input.fabricId });
+      if (!kept) throw new AppError('invalid_input', 'That fabric does not exist.', 400, { fabricId: 'No such fabric.' });
+      if (kept.ownerId !== actor.id) throw forbidden('That fabric belongs to someone else.');
+      fabric = kept.properties;
+    }
     if (!make.profileId) throw new AppError('conflict', 'This make has no measurement profile: choose one before planning.', 409);
     const profile = await this.db.getRepository(ProfileEntity).findOneBy({ id: make.profileId });
     if (!profile) throw new AppError('conflict', 'This make has no measurement profile: choose one before planning.', 409);
     const { pattern } = await this.patterns.loadVisible(actor, make.patternId);
     try {
-      return planFit({ unit: actor.units ?? 'cm', ...input.options, profile: { name: profile.name, measurements: profile.measurements }, pattern, ...(input.fabric !== undefined ? { fabric: input.fabric } : {}) });
+      return planFit({ unit: actor.units ?? 'cm', ...input.options, profile: { name: profile.name, measurements: profile.measurements }, pattern, ...(fabric !== undefined ? { fabric } : {}) });
     } catch (e) {
       if (e instanceof FitInputError) throw new AppError('invalid_input', `The plan cannot be made: ${e.message}`, 400, { plan: e.message });
       throw e;
