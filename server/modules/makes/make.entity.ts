@@ -1,17 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { OwnedEntity } from '../../db/owned-entity.ts';
 
 /** One garment in progress: a pattern, a profile, a fabric note and the alteration revisions. */
 @Entity({ name: 'makes' })
-export class MakeEntity {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column('uuid', { name: 'owner_id' })
-  ownerId: string;
-
-  @Column('text')
-  name: string;
-
+export class MakeEntity extends OwnedEntity {
   @Column('uuid', { name: 'pattern_id' })
   patternId: string;
 
@@ -31,10 +23,4 @@ export class MakeEntity {
 
   @Column('timestamptz', { name: 'archived_at', nullable: true })
   archivedAt: Date | null;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
-  updatedAt: Date;
 }

@@ -1,20 +1,12 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { OwnedEntity } from '../../db/owned-entity.ts';
 
 export const PATTERN_SOURCES = ['svg', 'dxf', 'json', 'demo'] as const;
 export type PatternSource = (typeof PATTERN_SOURCES)[number];
 
 /** An uploaded pattern: the imported geometry (never the uploaded file), private until published. */
 @Entity({ name: 'patterns' })
-export class PatternEntity {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column('uuid', { name: 'owner_id' })
-  ownerId: string;
-
-  @Column('text')
-  name: string;
-
+export class PatternEntity extends OwnedEntity {
   @Column('text', { name: 'source_format' })
   sourceFormat: PatternSource;
 
@@ -40,10 +32,4 @@ export class PatternEntity {
   /** Set when a coach published it to the shared library. */
   @Column('timestamptz', { name: 'published_at', nullable: true })
   publishedAt: Date | null;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
-  updatedAt: Date;
 }
