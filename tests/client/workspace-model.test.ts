@@ -6,6 +6,7 @@ import { amountAt, amountHandle, handlePoint } from '../../src/features/workspac
 import { applyIntent, type Intent, invertIntent, newEntryId } from '../../src/features/workspace/model/intents.ts';
 import { measureRows, pairedSeams } from '../../src/features/workspace/model/measurements.ts';
 import { prefixFor, previewWith, replaySafely } from '../../src/features/workspace/model/replay.ts';
+import { acceptPlan } from '../../src/features/workspace/model/plan.ts';
 import { BLEND } from '../bench/alterations.ts';
 
 const entry = (id: string, amount = 10): AlterationEntry => ({ id, enabled: true, op: { op: 'lengthen', line: 'lower leg', amount } });
@@ -141,5 +142,17 @@ describe('replay in the browser and the drag preview', () => {
       expect(row(`${piece}:crotch-curve`).now).toBeCloseTo(row(`${piece}:crotch-curve`).before!, 6);
     }
     expect(pairedSeams(now, undefined).map((p) => p.role).sort()).toEqual(['inseam', 'side-seam']);
+  });
+});
+
+describe('accepting a fit plan', () => {
+  it('keeps marked lines first and the other alterations after, and puts the plan\'s in place of the list\'s sizes and lengths', () => {
+    const mark: AlterationEntry = { id: 'm', enabled: true, op: { op: 'mark-line', piece: 'front', role: 'lengthen', name: 'knee adjust', at: { x: 0, y: 800 } } };
+    const old: AlterationEntry = { id: 'o', enabled: true, op: { op: 'lengthen', line: 'lower leg', amount: -20 } };
+    const seam: AlterationEntry = { id: 's', enabled: true, op: { op: 'seam-allowance', width: 15 } };
+    let n = 0;
+    const out = acceptPlan([seam, old, mark], { steps: [{ op: BLEND }, { op: { op: 'rise', line: 'rise', amount: 20 } }] }, () => `p${n++}`);
+    expect(out.map((e) => e.op.op)).toEqual(['mark-line', 'blend', 'rise', 'seam-allowance']);
+    expect(new Set(out.map((e) => e.id)).size).toBe(out.length);
   });
 });

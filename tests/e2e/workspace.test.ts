@@ -176,3 +176,24 @@ describe('two sessions on one make', () => {
     }
   }, 120_000);
 });
+
+describe('the fit plan', () => {
+  it('when Rui plans the fit of his make, then a size per level shows with reasons, and its alterations replace the list\'s sizes and lengths', async () => {
+    const page = session.page;
+    await signIn(page, 'rui@loomhollow.example');
+    await openMake(page, 'Linen summer trousers');
+    await page.getByRole('button', { name: 'Plan the fit' }).click();
+    await page.getByLabel('Stretch across the grain, %').fill('0');
+    await page.getByRole('button', { name: 'Make the plan' }).click();
+    const table = page.getByRole('table', { name: 'Size per level' });
+    await table.getByRole('row', { name: 'hip' }).waitFor({ timeout: 20_000 });
+    const suggested = page.getByRole('list', { name: 'Suggested alterations' }).getByRole('listitem');
+    expect(await suggested.count()).toBeGreaterThan(0);
+    await page.screenshot({ path: `${shots}/workspace-plan.png` });
+    const before = await savedAs(page);
+    await page.getByRole('button', { name: 'Use these alterations' }).click();
+    expect(await savedAs(page)).toBe(before + 1);
+    const list = page.getByRole('list', { name: 'Alterations' });
+    expect(await list.getByRole('listitem', { name: /^Blend sizes/ }).count()).toBe(1);
+  }, 90_000);
+});

@@ -17,6 +17,7 @@ import { type SaveStatus, useMakeEditor } from '../use-make-editor';
 import { AlterationList } from './alteration-list';
 import { ConflictDialog } from './conflict-dialog';
 import { MeasurementsPanel } from './measurements-panel';
+import { PlanPanel } from './plan-panel';
 import { RevisionHistory } from './revision-history';
 import { type ToolContext, ToolForm, type ToolId, ToolTabs, toolFor } from './tools';
 
@@ -184,6 +185,7 @@ export function MakeWorkspace({
   const [view, setView] = useState<CanvasView>({ mode: 'fit' });
   const zoom = view.mode === 'scale' ? Math.round((view.pxPerMm / calibration.pxPerMm) * 100) : null;
   const [printOpen, setPrintOpen] = useState(false);
+  const [planOpen, setPlanOpen] = useState(false);
 
   return (
     <div className="flex flex-col gap-3">
@@ -217,6 +219,9 @@ export function MakeWorkspace({
           </div>
         </details>
         <span className="flex-1" />
+        <Button variant="secondary" aria-expanded={planOpen} onClick={() => setPlanOpen((o) => !o)}>
+          Plan the fit
+        </Button>
         <Button variant="secondary" aria-expanded={historyOpen} onClick={() => setHistoryOpen((o) => !o)}>
           History
         </Button>
@@ -289,6 +294,7 @@ export function MakeWorkspace({
             </section>
           ) : null}
           {printOpen && printPanel ? <section aria-label="Print">{printPanel}</section> : null}
+          {planOpen && viewing === null ? <PlanPanel makeId={make.id} unit={unit} entries={entries} change={change} /> : null}
           <section aria-labelledby="alterations-heading" className="flex flex-col gap-2">
             <h2 id="alterations-heading" className="font-display text-lg text-ink-900">Alterations</h2>
             <AlterationList entries={entries} unit={unit} selectedId={selectedId} onSelect={select} onChange={change} error={committed.error} cautions={committed.cautions} />
