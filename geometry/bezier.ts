@@ -299,9 +299,15 @@ export function solveCubic(a: number, b: number, c: number, d: number): number[]
     const u = s === 0 ? 0 : Q / s;
     roots.push(s + u - A / 3);
   }
+  // A leading coefficient that is small beside the others (a cubic that is nearly a parabola)
+  // makes A, B, C huge and the closed form loses the roots near 0; the parabola's roots, polished
+  // on the cubic below, find them.
+  if (Math.abs(a) < 1e-6 * scale) roots.push(...solveQuadratic(b, c, d));
   // Newton polish: the closed form loses accuracy at multiple roots (a triple root is only
   // found to ~1e-5·scale^(1/3)); Newton converges there too, linearly, so iterate while |f| falls.
-  return roots.map((x) => {
+  // A candidate that does not polish into a root (its residual stays above ROOT_RESIDUAL of the
+  // coefficients' scale) is dropped, and repeats are merged.
+  const polished = roots.map((x) => {
     let fx = ((a * x + b) * x + c) * x + d;
     for (let i = 0; i < 60 && fx !== 0; i++) {
       const df = (3 * a * x + 2 * b) * x + c;
@@ -312,9 +318,19 @@ export function solveCubic(a: number, b: number, c: number, d: number): number[]
       x = nx;
       fx = nf;
     }
-    return x;
+    return { x, fx };
   });
+  const out: number[] = [];
+  for (const { x, fx } of polished) {
+    const size = Math.max(1, Math.abs(x));
+    if (!(Math.abs(fx) <= ROOT_RESIDUAL * scale * size * size * size)) continue;
+    if (!out.some((y) => Math.abs(y - x) <= 1e-12 * size)) out.push(x);
+  }
+  return out;
 }
+
+/** Relative residual below which a polished cubic root is accepted (see solveCubic). */
+const ROOT_RESIDUAL = 1e-9;
 
 /**
  * Parameters t in [0, 1] where the cubic meets the infinite line through `origin` with
