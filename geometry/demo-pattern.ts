@@ -7,7 +7,7 @@
  * Layout of each leg piece: grain line (= crease) on x = 0 pointing down (y grows downward),
  * side seam on the left (x < 0), centre front/back and crotch on the right (x > 0).
  */
-import { type Edge, type Landmark, type Outline, type Pattern, type PatternLine, type Piece, PATTERN_VERSION } from './model.ts';
+import { type Edge, type Landmark, type Outline, type Pattern, type PatternLine, type Piece, BODY_LEVELS, PATTERN_VERSION } from './model.ts';
 import type { Point } from './vec.ts';
 
 /** The demo sizes, smallest to largest. */
@@ -124,7 +124,7 @@ function legPiece(back: boolean): Piece {
     const size = DEMO_SIZES[i]!;
     const x0 = -halfWidth;
     const x1 = halfWidth + 20;
-    for (const name of ['hip', 'crotch', 'thigh', 'knee', 'calf'] as const) lines.push({ role: 'level', name, d: hline(levels[name]!, x0, x1), size });
+    for (const name of BODY_LEVELS) lines.push({ role: 'level', name, d: hline(levels[name]!, x0, x1), size });
     // the rise line: between the hip and crotch levels, a quarter of the way down, on the straight
     // part of the centre seam (trade reference §3.3)
     lines.push({ role: 'lengthen', name: 'rise', d: hline(levels.hip! + 0.25 * (levels.crotch! - levels.hip!), x0, x1), size });

@@ -176,6 +176,16 @@ export function sizeNumber(size: string): number | undefined {
   return Number(t);
 }
 
+/** Every size label of the pattern, smallest first when they are all numbers, else in the order met. */
+export function patternSizes(pattern: Pattern): string[] {
+  const seen: string[] = [];
+  for (const piece of pattern.pieces) for (const o of piece.outlines) if (!seen.includes(o.size)) seen.push(o.size);
+  return seen.every((s) => sizeNumber(s) !== undefined) ? seen.sort((a, b) => sizeNumber(a)! - sizeNumber(b)!) : seen;
+}
+
+/** The body levels a trouser pattern marks, from the waist down (level lines with these names). */
+export const BODY_LEVELS = ['hip', 'crotch', 'thigh', 'knee', 'calf'] as const;
+
 /**
  * The outlines of a piece ordered smallest to largest: by numeric value when every label is a
  * number, else in the order they are listed.

@@ -21,7 +21,7 @@
 import { type Outline, type Pattern, type PatternLine, type Piece, LINE_ROLES, PATTERN_VERSION, parsePattern } from './model.ts';
 import { type Contour, type Path, contourArea, contourFlatten, contourSelfCrossings, pathFromSvg, pathToSvg, pathTransform } from './path.ts';
 import { CLOSE_GAP } from './tolerance.ts';
-import { type Affine, AFFINE_IDENTITY, affineMultiply, affineRotate, affineScale, affineTranslate, vecDistance } from './vec.ts';
+import { type Affine, AFFINE_IDENTITY, affineMultiply, affineRotate, affineScale, affineTranslate, pointInPolygon, polygonDistance, vecDistance } from './vec.ts';
 import { type XmlElement, xmlParse } from './xml.ts';
 
 export class SvgImportError extends Error {
@@ -214,31 +214,6 @@ function polygonOf(c: Contour): { x: number; y: number }[] {
   return contourFlatten(c, 0.1).map((f) => f.point);
 }
 
-function pointInPolygon(p: { x: number; y: number }, pts: readonly { x: number; y: number }[]): boolean {
-  let inside = false;
-  for (let i = 0, j = pts.length - 1; i < pts.length; j = i++) {
-    const a = pts[i]!;
-    const b = pts[j]!;
-    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
-  }
-  return inside;
-}
-
-/** Distance from p to the polygon's edges. */
-function distanceToPolygon(p: { x: number; y: number }, pts: readonly { x: number; y: number }[]): number {
-  let best = Infinity;
-  for (let i = 0, j = pts.length - 1; i < pts.length; j = i++) {
-    const a = pts[j]!;
-    const b = pts[i]!;
-    const dx = b.x - a.x;
-    const dy = b.y - a.y;
-    const len2 = dx * dx + dy * dy;
-    const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2));
-    best = Math.min(best, Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy)));
-  }
-  return best;
-}
-
 /**
  * Does `inner` nest inside `outer`? Graded size lines often share a stretch of outline (a centre
  * front that does not grade) and cross where a length grades (a deeper crotch), so "inside" means
@@ -247,7 +222,7 @@ function distanceToPolygon(p: { x: number; y: number }, pts: readonly { x: numbe
 const NEST_TOUCH = 1;
 function nestsInside(inner: readonly { x: number; y: number }[], outer: readonly { x: number; y: number }[]): boolean {
   let hits = 0;
-  for (const p of inner) if (pointInPolygon(p, outer) || distanceToPolygon(p, outer) <= NEST_TOUCH) hits++;
+  for (const p of inner) if (pointInPolygon(p, outer) || polygonDistance(p, outer) <= NEST_TOUCH) hits++;
   return hits >= 0.7 * inner.length;
 }
 

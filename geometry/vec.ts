@@ -174,3 +174,29 @@ export function affineScaleInFrame(axis: Point, along: number, across: number, o
   const moved = affineApplyVector(lin, origin);
   return { ...lin, e: origin.x - moved.x, f: origin.y - moved.y };
 }
+
+/** Even–odd point-in-polygon test on a polyline (closed implicitly). */
+export function pointInPolygon(p: Point, poly: readonly Point[]): boolean {
+  let inside = false;
+  for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
+    const a = poly[i]!;
+    const b = poly[j]!;
+    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
+  }
+  return inside;
+}
+
+/** Distance from p to the edges of a polygon (closed implicitly); Infinity for an empty one. */
+export function polygonDistance(p: Point, poly: readonly Point[]): number {
+  let best = Infinity;
+  for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
+    const a = poly[j]!;
+    const b = poly[i]!;
+    const dx = b.x - a.x;
+    const dy = b.y - a.y;
+    const len2 = dx * dx + dy * dy;
+    const t = len2 > 0 ? Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2)) : 0;
+    best = Math.min(best, Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy)));
+  }
+  return best;
+}

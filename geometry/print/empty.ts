@@ -3,9 +3,8 @@
  * 0.01 mm, of the curves), not by bounding boxes: a tile is in use when the piece's outer line
  * crosses or touches its printable area, or the area lies wholly inside the piece.
  */
-import type { Point } from '../vec.ts';
+import { type Point, pointInPolygon } from '../vec.ts';
 import type { Rect } from './grid.ts';
-import { pointInPolygon } from './pieces.ts';
 
 /** Does the segment a–b meet the closed rectangle? (Liang–Barsky clipping.) */
 export function segmentMeetsRect(a: Point, b: Point, r: Rect): boolean {

@@ -6,7 +6,7 @@
 import { type Contour, contourFlatten, contourNearest, pathFromSvg, segmentTangent } from '../path.ts';
 import { type Outline, type Piece, type Pattern, linesForSize, outlineContour } from '../model.ts';
 import { pieceGrain } from '../ops/common.ts';
-import { type Point, vecNormalize, vecPerp } from '../vec.ts';
+import { type Point, pointInPolygon, vecNormalize, vecPerp } from '../vec.ts';
 import { PrintError } from './errors.ts';
 
 export interface PrintPiece {
@@ -43,17 +43,6 @@ export function printOutline(piece: Piece, size: string | undefined): Outline {
   }
   if (piece.outlines.length === 1) return piece.outlines[0]!;
   throw new PrintError('bad-size', `piece "${piece.name}" has ${piece.outlines.length} size lines: choose one size (${piece.outlines.map((x) => x.size).join(', ')}) or blend first`);
-}
-
-/** Even–odd point-in-polygon test on a polyline (closed implicitly). */
-export function pointInPolygon(p: Point, poly: readonly Point[]): boolean {
-  let inside = false;
-  for (let i = 0, j = poly.length - 1; i < poly.length; j = i++) {
-    const a = poly[i]!;
-    const b = poly[j]!;
-    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
-  }
-  return inside;
 }
 
 function notchesOf(outline: Outline, seam: Contour): PrintPiece['notches'] {

@@ -4,11 +4,10 @@
  * coordinates (the layout); page furniture is in sheet coordinates.
  */
 import { type Contour, contourFlatten, pathToSvg, pathTransform } from '../path.ts';
-import { type Affine, type Point, affineApply, affineApplyVector, vecNormalize } from '../vec.ts';
+import { type Affine, type Point, affineApply, affineApplyVector, pointInPolygon, polygonDistance, vecNormalize } from '../vec.ts';
 import type { Rect, Tile } from './grid.ts';
 import { MM_PER_INCH } from './paper.ts';
 import type { PrintPiece } from './pieces.ts';
-import { pointInPolygon } from './pieces.ts';
 import type { PrintPlan, SinglePlan, TiledPlan } from './plan.ts';
 import { SHEET_HEADER } from './plan.ts';
 
@@ -89,17 +88,7 @@ export function labelSpot(poly: readonly Point[]): { at: Point; clearance: numbe
     for (let j = 1; j < n; j++) {
       const p = { x: minX + ((maxX - minX) * i) / n, y: minY + ((maxY - minY) * j) / n };
       if (!pointInPolygon(p, poly)) continue;
-      // clearance measured across (x) with half weight along (y): labels are wider than tall
-      let d = Infinity;
-      for (let k = 0, m = poly.length - 1; k < poly.length; m = k++) {
-        const a = poly[m]!;
-        const b = poly[k]!;
-        const abx = b.x - a.x;
-        const aby = b.y - a.y;
-        const len2 = abx * abx + aby * aby;
-        const t = len2 > 0 ? Math.max(0, Math.min(1, ((p.x - a.x) * abx + (p.y - a.y) * aby) / len2)) : 0;
-        d = Math.min(d, Math.hypot(p.x - (a.x + t * abx), p.y - (a.y + t * aby)));
-      }
+      const d = polygonDistance(p, poly);
       if (d > best.clearance) best = { at: p, clearance: d };
     }
   return best;

@@ -9,7 +9,7 @@ import {
   importDxf,
   importSvg,
   parsePattern,
-  sizeNumber,
+  patternSizes,
 } from '../../../geometry/index.ts';
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import type { Role } from '../users/user.entity.ts';
@@ -29,13 +29,6 @@ export interface UploadedFile {
 
 /** Roles that may publish a pattern to the shared library. */
 const PUBLISHERS: readonly Role[] = ['coach', 'admin'];
-
-/** Every size label of the pattern, smallest first when they are numbers. */
-export function sizesOf(pattern: Pattern): string[] {
-  const seen: string[] = [];
-  for (const piece of pattern.pieces) for (const o of piece.outlines) if (!seen.includes(o.size)) seen.push(o.size);
-  return seen.every((s) => sizeNumber(s) !== undefined) ? seen.sort((a, b) => sizeNumber(a)! - sizeNumber(b)!) : seen;
-}
 
 /** Read an uploaded file with the engine's importers. Nothing of the file but the geometry is kept. */
 export function importUpload(file: UploadedFile): { pattern: Pattern; format: PatternSource; notes: string[] } {
@@ -94,7 +87,7 @@ export class PatternsService {
         sourceName: input.sourceName.slice(0, 200),
         data: input.pattern,
         pieceCount: input.pattern.pieces.length,
-        sizes: sizesOf(input.pattern),
+        sizes: patternSizes(input.pattern),
         importNotes: input.notes.slice(0, 50),
         publishedAt: null,
       }),
@@ -160,7 +153,7 @@ export class PatternsService {
       }
       changes.data = pattern;
       changes.pieceCount = pattern.pieces.length;
-      changes.sizes = sizesOf(pattern);
+      changes.sizes = patternSizes(pattern);
     }
     if (input.published !== undefined) changes.publishedAt = input.published ? (entity.publishedAt ?? new Date()) : null;
     const saved = await this.repo.save(this.repo.merge(entity, changes));

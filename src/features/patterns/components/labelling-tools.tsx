@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { EdgeRole, Point } from '../../../../geometry/index.ts';
+import { BODY_LEVELS, type EdgeRole, type Point } from '../../../../geometry/index.ts';
 import { Button } from '../../../components/ui/button';
 import { cx } from '../../../lib/cx';
 
@@ -18,7 +18,7 @@ export interface ToolOptions {
   squareToGrain: boolean;
 }
 
-export const LEVEL_CHOICES = ['hip', 'crotch', 'thigh', 'knee', 'calf'] as const;
+export const LEVEL_CHOICES = BODY_LEVELS;
 export const LENGTHEN_SUGGESTIONS = ['lower leg', 'upper leg', 'rise'] as const;
 
 /** Edge roles in the trade's words; the edge is named after its role unless it is "other". */

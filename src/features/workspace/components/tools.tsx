@@ -9,6 +9,8 @@ import {
   vecDistance,
   widthAtLevel,
   MeasureError,
+  BODY_LEVELS,
+  patternSizes,
 } from '../../../../geometry/index.ts';
 import type { CanvasPick } from '../../../components/pattern-canvas';
 import { Button } from '../../../components/ui/button';
@@ -143,20 +145,14 @@ function LengthTool({ ctx, rise }: { ctx: ToolContext; rise: boolean }) {
 /** Levels in body order: waist, the pattern's level lines from top to bottom, hem. */
 function levelsOf(pattern: Pattern): string[] {
   const names = lineNames(pattern, 'level');
-  const order = ['hip', 'crotch', 'thigh', 'knee', 'calf'];
+  const order: readonly string[] = BODY_LEVELS;
   names.sort((a, b) => (order.indexOf(a) + 1 || 99) - (order.indexOf(b) + 1 || 99));
   return ['waist', ...names, 'hem'];
 }
 
-function sizesOf(pattern: Pattern): string[] {
-  const sizes: string[] = [];
-  for (const piece of pattern.pieces) for (const o of piece.outlines) if (!sizes.includes(o.size)) sizes.push(o.size);
-  return sizes;
-}
-
 function BlendTool({ ctx }: { ctx: ToolContext }) {
   const levels = levelsOf(ctx.base);
-  const sizes = sizesOf(ctx.base);
+  const sizes = patternSizes(ctx.base);
   const editing = ctx.editing?.op.op === 'blend' ? ctx.editing.op : undefined;
   const initial = () => Object.fromEntries(levels.map((l) => [l, editing?.levels.find((x) => x.level === l)?.size.toString() ?? '']));
   const [chosen, setChosen] = useState<Record<string, string>>(initial);
