@@ -145,6 +145,8 @@ export const apiClient = {
     parseWith(schema, await request('POST', path, body)),
   patch: async <S extends z.ZodType>(path: string, body: unknown, schema: S) =>
     parseWith(schema, await request('PATCH', path, body)),
+  put: async <S extends z.ZodType>(path: string, body: unknown, schema: S) =>
+    parseWith(schema, await request('PUT', path, body)),
   /** A multipart form (file uploads), with the CSRF token like every other POST. */
   postForm: async <S extends z.ZodType>(path: string, form: FormData, schema: S) =>
     parseWith(schema, await request('POST', path, form)),
