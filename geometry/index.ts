@@ -37,3 +37,4 @@ export * from './print/scene.ts';
 export * from './fit/body.ts';
 export * from './fit/chart.ts';
 export * from './fit/plan.ts';
+export * from './fit/notes.ts';

@@ -29,7 +29,8 @@ export type LengthMeasure = (typeof LENGTH_MEASURES)[number];
 export type GarmentMeasure = GirthLevel | LengthMeasure;
 
 const mm = z.number({ error: 'must be a number of millimetres' }).positive('must be more than 0 mm').max(3000, 'must be 3 m or less');
-const label = z.string().trim().min(1, 'must not be empty').max(40);
+// a blended outline's label names each level's size ("waist 2.5 · hip 7.7 · …"), so allow room for five
+const label = z.string().trim().min(1, 'must not be empty').max(200);
 
 export const garmentMeasuresSchema = z.object(Object.fromEntries([...GIRTH_LEVELS, ...LENGTH_MEASURES].map((k) => [k, mm.optional()])) as Record<GarmentMeasure, z.ZodOptional<typeof mm>>).strict();
 export const chartBodySchema = z.object(Object.fromEntries(BODY_MEASUREMENT_NAMES.map((k) => [k, mm.optional()])) as Record<(typeof BODY_MEASUREMENT_NAMES)[number], z.ZodOptional<typeof mm>>).strict();

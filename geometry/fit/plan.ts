@@ -41,6 +41,7 @@ import { applyOps } from '../ops/apply.ts';
 import { type LengthUnit, formatLength } from '../units.ts';
 import { type BodyProfile, type FabricSummary, FitInputError, describeZodError, girthAtOffset, parseBodyProfile, parseFabric } from './body.ts';
 import { type ChartSize, type GarmentMeasure, type SizeChart, chartFromPattern, orderedChartSizes, parseSizeChart } from './chart.ts';
+import { noteCorrections, parseFitNote } from './notes.ts';
 
 /** The levels the planner sizes, top to bottom. The hem is a style choice, not fitted to the body. */
 export const FIT_LEVELS = ['waist', 'hip', 'thigh', 'knee', 'calf'] as const;
@@ -152,6 +153,17 @@ export interface PlanInput extends PlanOptions {
   readonly chart?: unknown;
   readonly fabric?: unknown;
   readonly pattern?: unknown;
+  /** The fit note of the make this one repeats ("sew it again"), and that make's name. */
+  readonly previous?: { readonly note: unknown; readonly makeName?: string };
+  /** The make's alterations now, to measure the garment before the plan (needs `pattern`). */
+  readonly current?: readonly AlterationOp[];
+}
+
+/** Finished girths (mm) of one garment at the planned levels. */
+export interface GarmentGirths {
+  /** What was measured, e.g. "size 8" or "your alterations now". */
+  readonly label: string;
+  readonly measures: Partial<Record<FitLevel, number>>;
 }
 
 export type Confidence = 'high' | 'medium' | 'low';
@@ -199,6 +211,15 @@ export interface FitPlan {
   /** The size table used (measured on the pattern when none was given). */
   readonly chart: SizeChart;
   readonly fabric?: FabricSummary;
+  /**
+   * The garment before the plan (the make's alterations now when they blend to one size, else
+   * the printed size nearest the hip size) and after it (the plan's changes made on the
+   * pattern, without the shrinkage allowance: the garment as worn), measured on the pieces.
+   * Null when there is no pattern or it cannot be measured.
+   */
+  readonly garment: { readonly before: GarmentGirths | null; readonly after: GarmentGirths | null };
+  /** What the earlier make's fit note changed in this plan, one line each. */
+  readonly fromPrevious: string[];
 }
 
 interface Pt {
@@ -298,7 +319,7 @@ function parseOrThrow<T>(what: string, schema: z.ZodType<T>, input: unknown): T 
  * use; everything it can still plan around becomes a caution.
  */
 export function planFit(input: PlanInput): FitPlan {
-  const { profile: profileInput, chart: chartInput, fabric: fabricInput, pattern: patternInput, ...rest } = input;
+  const { profile: profileInput, chart: chartInput, fabric: fabricInput, pattern: patternInput, previous: _previous, current: _current, ...rest } = input;
   const opts = parseOrThrow('plan options', planOptionsSchema, rest);
   const profile: BodyProfile = parseBodyProfile(profileInput);
   const fabric = fabricInput === undefined ? undefined : parseFabric(fabricInput);
@@ -319,6 +340,14 @@ export function planFit(input: PlanInput): FitPlan {
   const caution = (c: string): void => {
     if (!cautions.includes(c)) cautions.push(c);
   };
+
+  const note = input.previous === undefined ? undefined : parseFitNote(input.previous.note);
+  const corrections = note ? noteCorrections(note) : undefined;
+  const noteFrom = input.previous?.makeName ? `“${input.previous.makeName}”` : 'your last make';
+  const fromPrevious: string[] = [];
+  if (corrections)
+    for (const u of corrections.unsized) caution(`The note on ${noteFrom} says the ${u} but not by how much: the plan could not allow for it. Add the amount to the note, or change the ease by hand.`);
+  if (note && note.nextTime !== '') caution(`Your note on ${noteFrom}: “${note.nextTime}”`);
 
   const stretch = fabric ? fabric.stretchAcross / 100 : 0;
   const ks = opts.stretchShare * stretch;
@@ -357,8 +386,14 @@ export function planFit(input: PlanInput): FitPlan {
       continue;
     }
     const easeDefault = EASE_DEFAULTS[opts.fit][level];
-    const ease = opts.ease[level] ?? easeDefault.mm;
-    const easeSource = opts.ease[level] !== undefined ? 'your setting' : easeDefault.source;
+    const fromNote = corrections?.girth[level] ?? 0;
+    const ease = (opts.ease[level] ?? easeDefault.mm) + fromNote;
+    let easeSource = opts.ease[level] !== undefined ? 'your setting' : easeDefault.source;
+    if (fromNote !== 0) {
+      const line = `${level[0]!.toUpperCase()}${level.slice(1)}: ${noteFrom} was ${L(Math.abs(fromNote))} too ${fromNote > 0 ? 'tight' : 'loose'} there, so the ease is ${L(Math.abs(fromNote))} ${fromNote > 0 ? 'more' : 'less'}.`;
+      easeSource = `${easeSource}, ${fromNote > 0 ? '+' : '−'} ${L(Math.abs(fromNote))} from the note on ${noteFrom}`;
+      fromPrevious.push(line);
+    }
     const comfort = body + ease;
     const target = comfort * (1 - reduction);
 
@@ -406,7 +441,8 @@ export function planFit(input: PlanInput): FitPlan {
       change === 0
         ? `size ${size} measures ${L(garment)}${reduction > 0 && garment > target + FIT_GIRTH_TOLERANCE ? ', within what the stretch absorbs' : ''}`
         : `size ${size} measures ${L(garment)}, ${L(Math.abs(change))} too ${change > 0 ? 'small' : 'big'}: ${change > 0 ? 'let out' : 'take in'} ${L(Math.abs(change))}`;
-    const reason = `${level[0]!.toUpperCase()}${level.slice(1)}: ${where} + ${L(ease)} ease = ${L(comfort)}${stretchWords}; ${sizeWords}.`;
+    const easeWords = fromNote !== 0 ? `${L(ease)} ease (${fromNote > 0 ? 'with' : 'less'} ${L(Math.abs(fromNote))} for the note on ${noteFrom})` : `${L(ease)} ease`;
+    const reason = `${level[0]!.toUpperCase()}${level.slice(1)}: ${where} + ${easeWords} = ${L(comfort)}${stretchWords}; ${sizeWords}.`;
     levels.push({ level, body, bodyFrom, offset, ease, easeSource, stretchReduction: reduction, target, comfort, size, sizeFrom, garmentAtSize: garment, change, reason, confidence });
 
     if (beyond > 0)
@@ -466,14 +502,16 @@ export function planFit(input: PlanInput): FitPlan {
     caution('The size table has no crotch depth (or no size was planned at the hip): the rise was not planned.');
   } else {
     const riseEase = opts.ease.rise ?? EASE_DEFAULTS[opts.fit].rise.mm;
-    const want = profile.bodyRise + riseEase + opts.waistOffset;
+    const riseNote = corrections?.rise ?? 0;
+    const want = profile.bodyRise + riseEase + opts.waistOffset + riseNote;
+    if (riseNote !== 0) fromPrevious.push(`Rise: ${noteFrom} was ${L(Math.abs(riseNote))} too ${riseNote > 0 ? 'short' : 'long'} in the rise, so the rise aimed at is ${L(Math.abs(riseNote))} ${riseNote > 0 ? 'longer' : 'shorter'}.`);
     const amount = round1(want - depth.value);
     if (Math.abs(amount) >= FIT_LENGTH_TOLERANCE) {
       if (!riseLine) caution(`The rise should change by ${L(amount)}, but the pattern's leg pieces have no lengthen line named "rise".`);
       else
         steps.push({
           op: { op: 'rise', line: riseLine, amount },
-          reason: `Rise: body rise ${L(profile.bodyRise)} + ${L(riseEase)} ease${opts.waistOffset !== 0 ? ` ${opts.waistOffset > 0 ? '+' : '−'} ${L(Math.abs(opts.waistOffset))} for the waistband's height` : ''} = ${L(want)}; the pattern's crotch depth ${depth.where} is ${L(depth.value)}: ${amount > 0 ? 'raise' : 'lower'} by ${L(Math.abs(amount))}.`,
+          reason: `Rise: body rise ${L(profile.bodyRise)} + ${L(riseEase)} ease${opts.waistOffset !== 0 ? ` ${opts.waistOffset > 0 ? '+' : '−'} ${L(Math.abs(opts.waistOffset))} for the waistband's height` : ''}${riseNote !== 0 ? ` ${riseNote > 0 ? '+' : '−'} ${L(Math.abs(riseNote))} for the note on ${noteFrom}` : ''} = ${L(want)}; the pattern's crotch depth ${depth.where} is ${L(depth.value)}: ${amount > 0 ? 'raise' : 'lower'} by ${L(Math.abs(amount))}.`,
           confidence: 'medium',
         });
     }
@@ -481,7 +519,9 @@ export function planFit(input: PlanInput): FitPlan {
 
   const inseam = lengthAt('inseam', ['thigh', 'hip', 'knee', 'waist']);
   if (profile.insideLegLength !== undefined && inseam !== undefined) {
-    const want = profile.insideLegLength + opts.inseamOffset;
+    const lengthNote = corrections?.length ?? 0;
+    const want = profile.insideLegLength + opts.inseamOffset + lengthNote;
+    if (lengthNote !== 0) fromPrevious.push(`Leg length: ${noteFrom} was ${L(Math.abs(lengthNote))} too ${lengthNote > 0 ? 'short' : 'long'}, so the legs aimed at are ${L(Math.abs(lengthNote))} ${lengthNote > 0 ? 'longer' : 'shorter'}.`);
     const amount = round1(want - inseam.value);
     if (Math.abs(amount) >= FIT_LENGTH_TOLERANCE) {
       if (legLines.length === 0) caution(`The legs should change by ${L(amount)}, but the pattern's leg pieces have no lengthen/shorten line.`);
@@ -492,7 +532,7 @@ export function planFit(input: PlanInput): FitPlan {
           const part = i === n - 1 ? round1(amount - each * (n - 1)) : each;
           steps.push({
             op: { op: 'lengthen', line, amount: part },
-            reason: `Leg length: inside leg ${L(profile.insideLegLength!)}${opts.inseamOffset !== 0 ? ` ${opts.inseamOffset > 0 ? '+' : '−'} ${L(Math.abs(opts.inseamOffset))}` : ''} against the pattern's inseam of ${L(inseam.value)} ${inseam.where}: ${amount > 0 ? 'lengthen' : 'shorten'} by ${L(Math.abs(amount))}${n > 1 ? `, ${L(Math.abs(part))} of it at "${line}"` : ''}.`,
+            reason: `Leg length: inside leg ${L(profile.insideLegLength!)}${opts.inseamOffset !== 0 ? ` ${opts.inseamOffset > 0 ? '+' : '−'} ${L(Math.abs(opts.inseamOffset))}` : ''}${lengthNote !== 0 ? ` ${lengthNote > 0 ? '+' : '−'} ${L(Math.abs(lengthNote))} for the note on ${noteFrom}` : ''} against the pattern's inseam of ${L(inseam.value)} ${inseam.where}: ${amount > 0 ? 'lengthen' : 'shorten'} by ${L(Math.abs(amount))}${n > 1 ? `, ${L(Math.abs(part))} of it at "${line}"` : ''}.`,
             confidence: 'medium',
           });
         });
@@ -538,17 +578,72 @@ export function planFit(input: PlanInput): FitPlan {
     if (fabric.stretchAlong >= 15) caution(`The cloth stretches ${Math.round(fabric.stretchAlong)} % along the grain too: stretching across pulls it shorter; lengths may need 0–5 % less (common practice).`);
   }
 
-  // check the plan on the pattern itself
+  // check the plan on the pattern itself, and measure the garment before and after it
+  let after: GarmentGirths | null = null;
   if (pattern && steps.length > 0) {
     try {
       const r = applyOps(pattern, steps.map((s) => s.op));
       // fractional sizes are the plan itself (each level says so); other notes are passed on
       for (const c of r.cautions) if (c.code !== 'fractional-size') caution(`Step ${c.op + 1}: ${c.message}`);
+      const worn = steps.filter((st) => st.op.op !== 'shrinkage').map((st) => st.op);
+      after = measureGirths(worn.length === steps.length ? r.pattern : applyOps(pattern, worn).pattern, 'after the plan', opts.seamAllowance);
     } catch (e) {
       caution(`The planned changes could not all be made on this pattern: ${e instanceof Error ? e.message : String(e)}`);
     }
   }
+  const before = pattern ? garmentBefore(pattern, input.current, levels, scale, opts.seamAllowance) : null;
   caution('Sizing advice is guidance, not a guarantee of fit: sew a test garment before cutting the good cloth.');
 
-  return { units: 'mm', fit: opts.fit, levels, ops: steps.map((s) => s.op), steps, cautions, chart, ...(fabric ? { fabric } : {}) };
+  return { units: 'mm', fit: opts.fit, levels, ops: steps.map((s) => s.op), steps, cautions, chart, ...(fabric ? { fabric } : {}), garment: { before, after }, fromPrevious };
+}
+
+/** The finished girths of a pattern that has one outline per piece (after a blend); null otherwise. */
+function measureGirths(pattern: Pattern, label: string, seamAllowance: number | undefined): GarmentGirths | null {
+  let chart: SizeChart;
+  try {
+    chart = chartFromPattern(pattern, seamAllowance !== undefined ? { seamAllowance } : {});
+  } catch {
+    return null;
+  }
+  if (chart.sizes.length !== 1) return null;
+  const g = chart.sizes[0]!.garment;
+  const measures: Partial<Record<FitLevel, number>> = {};
+  for (const level of FIT_LEVELS) if (g[level] !== undefined) measures[level] = g[level];
+  return { label, measures };
+}
+
+/**
+ * The garment before the plan: the make's alterations now when they leave one outline per
+ * piece (a blend), else the printed size nearest the size planned at the hip (or the first
+ * planned level), straight.
+ */
+function garmentBefore(pattern: Pattern, current: readonly AlterationOp[] | undefined, levels: readonly PlannedLevel[], scale: SizeScale, seamAllowance: number | undefined): GarmentGirths | null {
+  if (current && current.length > 0) {
+    try {
+      const r = applyOps(pattern, current);
+      const now = measureGirths(r.pattern, 'your alterations now', seamAllowance);
+      if (now) return now;
+    } catch {
+      // a list the pattern no longer takes: fall back to a straight size
+    }
+  }
+  const anchor = levels.find((l) => l.level === 'hip') ?? levels[0];
+  if (!anchor) return null;
+  const at = scale.numeric ? (sizeNumber(anchor.size) ?? 0) : scale.sizes.findIndex((s) => s.size === anchor.size);
+  let nearest = 0;
+  scale.values.forEach((v, i) => {
+    if (Math.abs(v - at) < Math.abs(scale.values[nearest]! - at)) nearest = i;
+  });
+  const label = scale.sizes[nearest]!.size;
+  try {
+    // every level at one size: the pattern's own outline of that size
+    const straight = measureGirths(applyOps(pattern, [{ op: 'blend', levels: [{ level: 'waist', size: label }] }]).pattern, `size ${label}`, seamAllowance);
+    if (straight) return straight;
+  } catch {
+    // the table's size is not one of the pattern's size lines: read the table instead
+  }
+  const g = scale.sizes[nearest]!.garment;
+  const measures: Partial<Record<FitLevel, number>> = {};
+  for (const level of FIT_LEVELS) if (g[level] !== undefined) measures[level] = g[level];
+  return { label: `size ${label}`, measures };
 }
