@@ -7,6 +7,8 @@ import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
 import { usePattern } from '../../features/patterns/api/get-pattern';
 import { PatternReview } from '../../features/patterns/components/pattern-review';
+import { SizeTable } from '../../features/patterns/components/size-table';
+import { piecesIncludeSeamAllowance } from '../../features/patterns/model/size-chart';
 
 /** One pattern: its owner reviews and labels it; anyone else who may see it reads it and can start a make. */
 export function PatternReviewRoute() {
@@ -38,6 +40,9 @@ export function PatternReviewRoute() {
           </TextLink>
         }
       />
+      <div className="mt-8">
+        <SizeTable patternId={detail.id} units={me.units} canEdit={detail.canEdit} includesSeamAllowance={piecesIncludeSeamAllowance(detail.pattern)} />
+      </div>
     </>
   );
 }

@@ -1,0 +1,31 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiClient } from '../../../lib/api-client';
+import type { chartInputFromDraft } from '../model/size-chart';
+import { sizeChartKeys, sizeChartSchema, type SizeChart } from './get-size-chart';
+
+export type SizeChartInput = ReturnType<typeof chartInputFromDraft>;
+
+/** Owner only: the printed table replaces the one kept (400 with fields for a bad table). */
+export function saveSizeChart({ patternId, chart }: { patternId: string; chart: SizeChartInput }): Promise<SizeChart> {
+  return apiClient.put(`/patterns/${encodeURIComponent(patternId)}/size-chart`, { chart }, z.object({ printed: sizeChartSchema })).then((r) => r.printed);
+}
+
+/** Owner only: no printed table any more (the plan then measures the pieces). */
+export const deleteSizeChart = ({ patternId }: { patternId: string }) => apiClient.delete(`/patterns/${encodeURIComponent(patternId)}/size-chart`);
+
+export function useSaveSizeChart() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: saveSizeChart,
+    onSuccess: (_printed, { patternId }) => void queryClient.invalidateQueries({ queryKey: sizeChartKeys.all(patternId) }),
+  });
+}
+
+export function useDeleteSizeChart() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deleteSizeChart,
+    onSuccess: (_nothing, { patternId }) => void queryClient.invalidateQueries({ queryKey: sizeChartKeys.all(patternId) }),
+  });
+}
