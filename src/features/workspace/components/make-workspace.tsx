@@ -16,6 +16,7 @@ import { workspaceKeys } from '../query-keys';
 import { type SaveStatus, useMakeEditor } from '../use-make-editor';
 import { AlterationList } from './alteration-list';
 import { ConflictDialog } from './conflict-dialog';
+import { FitNotePanel } from './fit-note-panel';
 import { MeasurementsPanel } from './measurements-panel';
 import { PlanPanel } from './plan-panel';
 import { RevisionHistory } from './revision-history';
@@ -186,6 +187,7 @@ export function MakeWorkspace({
   const zoom = view.mode === 'scale' ? Math.round((view.pxPerMm / calibration.pxPerMm) * 100) : null;
   const [printOpen, setPrintOpen] = useState(false);
   const [planOpen, setPlanOpen] = useState(false);
+  const [noteOpen, setNoteOpen] = useState(false);
 
   return (
     <div className="flex flex-col gap-3">
@@ -221,6 +223,9 @@ export function MakeWorkspace({
         <span className="flex-1" />
         <Button variant="secondary" aria-expanded={planOpen} onClick={() => setPlanOpen((o) => !o)}>
           Plan the fit
+        </Button>
+        <Button variant="secondary" aria-expanded={noteOpen} onClick={() => setNoteOpen((o) => !o)}>
+          How did it fit?
         </Button>
         <Button variant="secondary" aria-expanded={historyOpen} onClick={() => setHistoryOpen((o) => !o)}>
           History
@@ -294,7 +299,8 @@ export function MakeWorkspace({
             </section>
           ) : null}
           {printOpen && printPanel ? <section aria-label="Print">{printPanel}</section> : null}
-          {planOpen && viewing === null ? <PlanPanel makeId={make.id} unit={unit} entries={entries} change={change} /> : null}
+          {planOpen && viewing === null ? <PlanPanel makeId={make.id} patternId={make.pattern.id} unit={unit} entries={entries} change={change} /> : null}
+          {noteOpen ? <FitNotePanel makeId={make.id} unit={unit} /> : null}
           <section aria-labelledby="alterations-heading" className="flex flex-col gap-2">
             <h2 id="alterations-heading" className="font-display text-lg text-ink-900">Alterations</h2>
             <AlterationList entries={entries} unit={unit} selectedId={selectedId} onSelect={select} onChange={change} error={committed.error} cautions={committed.cautions} />
