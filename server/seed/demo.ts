@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
-import { type AlterationEntry, demoPattern } from '../../geometry/index.ts';
+import { type AlterationEntry, type SizeChart, chartFromPattern, demoPattern, parsePattern } from '../../geometry/index.ts';
+import { FabricsService } from '../modules/fabrics/fabrics.service.ts';
 import { MakesService } from '../modules/makes/makes.service.ts';
 import { PatternsService } from '../modules/patterns/patterns.service.ts';
 import { ProfilesService } from '../modules/profiles/profiles.service.ts';
@@ -86,13 +87,31 @@ export async function seedDemo(db: DataSource): Promise<boolean> {
   const patterns = new PatternsService(db);
   const pattern = await patterns.create(mina.id, { pattern: demoPattern(), name: DEMO_PATTERN_NAME, format: 'demo', sourceName: 'made by Blockwright', notes: [] });
   await patterns.update(mina, pattern.id, { published: true });
+  await patterns.setSizeChart(mina, pattern.id, demoPrintedSizeChart());
 
   const profiles = new ProfilesService(db);
   const makes = new MakesService(db, patterns);
   // Invented bodies (mm), matching the accounts' descriptions.
   const adaProfile = await profiles.create(ada.id, {
     name: 'Ada',
+    takenOn: '2026-03-14',
+    note: 'Measured at the studio by Mina.',
+    measurements: { waistGirth: 655, hipGirth: 990, thighGirth: 610, kneeGirth: 385, calfGirth: 365, bodyRise: 255, insideLegLength: 700, height: 1580 },
+  });
+  // Measured again in the autumn: a little fuller at the hip and thigh, and the girth where a
+  // higher waistband sits.
+  await profiles.update(ada.id, adaProfile.id, {
+    takenOn: '2026-11-20',
+    note: 'Measured again before the second pair.',
     measurements: { waistGirth: 660, hipGirth: 1000, thighGirth: 620, kneeGirth: 390, calfGirth: 370, bodyRise: 255, insideLegLength: 700, height: 1580 },
+    girthsAtHeights: [
+      { offset: 50.8, girth: 645 },
+      { offset: -50.8, girth: 760 },
+    ],
+  });
+  const adaDenim = await new FabricsService(db).create(ada.id, {
+    name: 'Rigid indigo denim',
+    properties: { stretchAcross: 2, stretchAlong: 1, recovery: 95, weightOzPerSqYd: 12, width: 1500, shrinkage: { warp: { before: 500, after: 485 }, weft: { before: 500, after: 492 } }, prewashed: true },
   });
   const ruiProfile = await profiles.create(rui.id, {
     name: 'Rui',
@@ -100,6 +119,50 @@ export async function seedDemo(db: DataSource): Promise<boolean> {
   });
   const adaMake = await makes.create(ada, { name: 'Everyday jeans', patternId: pattern.id, profileId: adaProfile.id, fabricNote: 'Rigid indigo denim, 12 oz, 150 cm wide; washed twice before cutting.' });
   await makes.saveRevision(ada, adaMake.id, { baseRevision: adaMake.latestRevision, alterations: DEMO_ADA_ALTERATIONS, summary: 'Blended 0–4–8–10, shortened the legs 3 in, added 2 in of rise' });
+  await makes.update(ada, adaMake.id, { fabricId: adaDenim.id });
+  await makes.setFitNote(ada, adaMake.id, {
+    levels: { waist: { verdict: 'tight', amount: 12.7 }, hip: { verdict: 'right' }, thigh: { verdict: 'right' }, calf: { verdict: 'loose', amount: 20 }, rise: { verdict: 'right' }, length: { verdict: 'long', amount: 12.7 } },
+    nextTime: 'Waistband snug after lunch; calves a little wide. Hem half an inch shorter.',
+  });
   await makes.create(rui, { name: 'Linen summer trousers', patternId: pattern.id, profileId: ruiProfile.id, fabricNote: 'Mid-weight linen, 140 cm wide.' });
   return true;
+}
+
+/**
+ * The size table "printed" with the demo pattern: an invented table made from the pattern's own
+ * pieces, rounded to 5 mm as a printed table would be, with the body chart each size is drafted
+ * for (finished girth less the regular ease of geometry/fit/plan.ts, rounded to 5 mm). The
+ * rounding leaves small differences for the size-table comparison to show.
+ */
+export function demoPrintedSizeChart(): SizeChart {
+  const measured = chartFromPattern(parsePattern(demoPattern()));
+  const r5 = (v: number | undefined): number | undefined => (v === undefined ? undefined : Math.round(v / 5) * 5);
+  const defined = <T extends object>(o: T): T => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as T;
+  return {
+    name: 'Loomhollow straight-leg trouser: finished measurements',
+    source: 'printed',
+    notes: ['Finished garment measurements; hip round the whole garment, thigh to hem round one leg.'],
+    sizes: measured.sizes.map((s) => ({
+      size: s.size,
+      garment: defined({
+        waist: r5(s.garment.waist),
+        hip: r5(s.garment.hip),
+        thigh: r5(s.garment.thigh),
+        knee: r5(s.garment.knee),
+        calf: r5(s.garment.calf),
+        hem: r5(s.garment.hem),
+        frontRise: r5(s.garment.frontRise),
+        backRise: r5(s.garment.backRise),
+        inseam: r5(s.garment.inseam),
+        crotchDepth: r5(s.garment.crotchDepth),
+      }),
+      body: defined({
+        waistGirth: r5(s.garment.waist === undefined ? undefined : s.garment.waist - 19.05),
+        hipGirth: r5(s.garment.hip === undefined ? undefined : s.garment.hip - 50.8),
+        thighGirth: r5(s.garment.thigh === undefined ? undefined : s.garment.thigh - 50),
+        kneeGirth: r5(s.garment.knee === undefined ? undefined : s.garment.knee - 50),
+        calfGirth: r5(s.garment.calf === undefined ? undefined : s.garment.calf - 40),
+      }),
+    })),
+  };
 }

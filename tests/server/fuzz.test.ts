@@ -26,7 +26,7 @@ afterAll(async () => {
   await t.close();
 });
 
-const routes: Array<['post' | 'patch', string]> = [
+const routes: Array<['post' | 'patch' | 'put', string]> = [
   ['post', '/api/auth/sign-in'],
   ['post', '/api/auth/sign-up'],
   ['post', '/api/auth/password-reset'],
@@ -45,6 +45,8 @@ const routes: Array<['post' | 'patch', string]> = [
   ['patch', '/api/profiles/:profileId'],
   ['post', '/api/fabrics'],
   ['patch', '/api/fabrics/:fabricId'],
+  ['put', '/api/makes/:makeId/fit-note'],
+  ['put', '/api/patterns/:patternId/size-chart'],
 ];
 
 /** Alteration lists shaped like real ones, with any numbers (huge, tiny, negative) and names. */
@@ -92,6 +94,16 @@ const body = fc.oneof(
       restoredFrom: fc.jsonValue(),
       properties: fc.oneof(fc.record({ stretchAcross: amount, weightGsm: amount, weightOzPerSqYd: amount }, { requiredKeys: [] }), fc.jsonValue()),
       fabricId: fc.oneof(fc.constant('$fabricId'), fc.jsonValue()),
+      takenOn: fc.oneof(fc.constantFrom('2026-01-01', '2026-02-30', '1899-12-31'), fc.jsonValue()),
+      girthsAtHeights: fc.oneof(fc.array(fc.record({ offset: amount, girth: amount }), { maxLength: 3 }), fc.jsonValue()),
+      note: fc.jsonValue(),
+      chart: fc.oneof(
+        fc.constantFrom('printed', 'measured'),
+        fc.record({ sizes: fc.array(fc.record({ size: fc.oneof(fc.constantFrom('8', '10'), fc.jsonValue()), garment: fc.dictionary(fc.constantFrom('waist', 'hip', 'inseam'), amount) }), { maxLength: 3 }) }),
+        fc.jsonValue(),
+      ),
+      levels: fc.oneof(fc.dictionary(fc.constantFrom('waist', 'hip', 'rise', 'length'), fc.record({ verdict: fc.constantFrom('tight', 'right', 'loose', 'short', 'long'), amount }, { requiredKeys: ['verdict'] })), fc.jsonValue()),
+      nextTime: fc.jsonValue(),
     },
     { requiredKeys: [] },
   ),

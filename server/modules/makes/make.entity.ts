@@ -1,4 +1,5 @@
 import { Column, Entity } from 'typeorm';
+import type { FitNote } from '../../../geometry/index.ts';
 import { OwnedEntity } from '../../db/owned-entity.ts';
 
 /** One garment in progress: a pattern, a profile, a fabric note and the alteration revisions. */
@@ -20,6 +21,14 @@ export class MakeEntity extends OwnedEntity {
   /** Number of the newest revision; 0 before the first save. Compared and set atomically. */
   @Column('integer', { name: 'latest_revision' })
   latestRevision: number;
+
+  /** One of the owner's kept fabrics, which the fit plan reads. */
+  @Column('uuid', { name: 'fabric_id', nullable: true })
+  fabricId: string | null;
+
+  /** How the finished garment fit, and what to change next time ("sew it again" reads it). */
+  @Column('jsonb', { name: 'fit_note', nullable: true })
+  fitNote: (FitNote & { updatedAt: string }) | null;
 
   @Column('timestamptz', { name: 'archived_at', nullable: true })
   archivedAt: Date | null;

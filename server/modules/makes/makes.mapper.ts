@@ -1,4 +1,4 @@
-import type { AlterationEntry } from '../../../geometry/index.ts';
+import type { AlterationEntry, FitNote } from '../../../geometry/index.ts';
 import type { MakeRevisionEntity } from './make-revision.entity.ts';
 import type { MakeEntity } from './make.entity.ts';
 
@@ -8,6 +8,8 @@ export interface MakeSummaryDto {
   pattern: { id: string; name: string };
   profile: { id: string; name: string } | null;
   fabricNote: string;
+  fabricId: string | null;
+  fitNote: (FitNote & { updatedAt: string }) | null;
   sourceMakeId: string | null;
   latestRevision: number;
   alterationCount: number;
@@ -46,6 +48,8 @@ export const toMakeSummaryDto = ({ make, patternName, profileName, alterationCou
   pattern: { id: make.patternId, name: patternName },
   profile: make.profileId && profileName !== null ? { id: make.profileId, name: profileName } : null,
   fabricNote: make.fabricNote,
+  fabricId: make.fabricId,
+  fitNote: make.fitNote,
   sourceMakeId: make.sourceMakeId,
   latestRevision: make.latestRevision,
   alterationCount,

@@ -5,6 +5,7 @@ import { idParamsSchema } from '../users/users.schemas.ts';
 import {
   createMakeSchema,
   duplicateMakeSchema,
+  fitNoteRequestSchema,
   listMakesQuerySchema,
   planRequestSchema,
   revisionParamsSchema,
@@ -50,7 +51,19 @@ export function makesRouter(deps: { makes: MakesService }): Router {
   router.post('/:id/plan', async (req, res) => {
     const { id } = parseInput(idParamsSchema, req.params, 'address');
     const input = parseInput(planRequestSchema, req.body, 'plan request');
-    res.json({ plan: await deps.makes.plan(currentUser(req), id, input) });
+    res.json(await deps.makes.plan(currentUser(req), id, input));
+  });
+
+  router.put('/:id/fit-note', async (req, res) => {
+    const { id } = parseInput(idParamsSchema, req.params, 'address');
+    const note = parseInput(fitNoteRequestSchema, req.body, 'fit note');
+    res.json({ fitNote: await deps.makes.setFitNote(currentUser(req), id, note) });
+  });
+
+  router.delete('/:id/fit-note', async (req, res) => {
+    const { id } = parseInput(idParamsSchema, req.params, 'address');
+    await deps.makes.setFitNote(currentUser(req), id, null);
+    res.status(204).end();
   });
 
   router.get('/:id/revisions', async (req, res) => {

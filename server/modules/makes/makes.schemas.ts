@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { alterationEntriesSchema } from '../../../geometry/index.ts';
+import { alterationEntriesSchema, fitNoteSchema } from '../../../geometry/index.ts';
 
 export const makeNameSchema = z
   .string({ error: 'Enter a name for the make.' })
@@ -23,6 +23,7 @@ export const updateMakeSchema = z
     name: makeNameSchema.optional(),
     profileId: optionalId.optional(),
     fabricNote: fabricNoteSchema.optional(),
+    fabricId: optionalId.optional(),
     archived: z.boolean({ error: 'archived must be true or false.' }).optional(),
   })
   .strict()
@@ -57,6 +58,11 @@ export const planRequestSchema = z
     /** One of the person's kept fabrics, in place of `fabric`. */
     fabricId: z.uuid({ error: 'Not a valid fabric id.' }).optional(),
     options: z.record(z.string(), z.unknown()).default({}),
+    /** The pattern's printed size table, or the finished measurements measured on its pieces. */
+    chart: z.enum(['printed', 'measured'], { error: 'chart must be "printed" or "measured".' }).optional(),
   })
   .strict()
   .refine((v) => v.fabric === undefined || v.fabricId === undefined, { message: 'Send fabric or fabricId, not both.', path: ['fabricId'] });
+
+/** How the make fit at each level and what to change next time (geometry/fit/notes.ts). */
+export const fitNoteRequestSchema = fitNoteSchema;

@@ -1,5 +1,16 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { type AlterationEntry, AlterationListError, type FitPlan, FitInputError, type Pattern, alterationEntriesSchema, planFit, replayAlterations } from '../../../geometry/index.ts';
+import {
+  type AlterationEntry,
+  AlterationListError,
+  type AlterationOp,
+  type FitNote,
+  type FitPlan,
+  FitInputError,
+  type Pattern,
+  alterationEntriesSchema,
+  planFit,
+  replayAlterations,
+} from '../../../geometry/index.ts';
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import type { Actor, PatternsService } from '../patterns/patterns.service.ts';
 import { FabricEntity } from '../fabrics/fabric.entity.ts';
@@ -95,6 +106,14 @@ export class MakesService {
     return { ...(await this.summary(id)), revision: toRevisionDto(revision, await this.authorName(revision.authorId)) };
   }
 
+  /** A kept fabric the person may use: 400 when missing, 403 when it is someone else's. */
+  private async ownFabric(actor: Actor, fabricId: string): Promise<FabricEntity> {
+    const kept = await this.db.getRepository(FabricEntity).findOneBy({ id: fabricId });
+    if (!kept) throw new AppError('invalid_input', 'That fabric does not exist.', 400, { fabricId: 'No such fabric.' });
+    if (kept.ownerId !== actor.id) throw forbidden('That fabric belongs to someone else.');
+    return kept;
+  }
+
   private async checkProfile(actor: Actor, profileId: string | null | undefined): Promise<void> {
     if (!profileId) return;
     const profile = await this.db.getRepository(ProfileEntity).findOneBy({ id: profileId });
@@ -114,7 +133,10 @@ export class MakesService {
     }
   }
 
-  private async createWith(actor: Actor, input: { name: string; patternId: string; profileId: string | null; fabricNote: string; sourceMakeId: string | null }, first: { alterations: AlterationEntry[]; summary: string }): Promise<string> {
+  private async createWith(
+    actor: Actor,
+    input: { name: string; patternId: string; profileId: string | null; fabricNote: string; fabricId?: string | null; sourceMakeId: string | null },
+    first: { alterations: AlterationEntry[]; summary: string }): Promise<string> {
     return this.db.transaction(async (manager) => {
       const make = await manager.getRepository(MakeEntity).save(
         manager.getRepository(MakeEntity).create({ ownerId: actor.id, ...input, latestRevision: 1, archivedAt: null }),
@@ -133,7 +155,7 @@ export class MakesService {
       throw e;
     }
     await this.checkProfile(actor, input.profileId);
-    const id = await this.createWith(actor, { ...input, sourceMakeId: null }, { alterations: [], summary: 'Started the make' });
+    const id = await this.createWith(actor, { ...input, fabricId: null, sourceMakeId: null }, { alterations: [], summary: 'Started the make' });
     return this.detail(actor, id);
   }
 
@@ -143,19 +165,21 @@ export class MakesService {
     const revision = await this.revisionEntity(source.id, source.latestRevision);
     const newId = await this.createWith(
       actor,
-      { name: name ?? `${source.name} (again)`.slice(0, 120), patternId: source.patternId, profileId: source.profileId, fabricNote: source.fabricNote, sourceMakeId: source.id },
+      { name: name ?? `${source.name} (again)`.slice(0, 120), patternId: source.patternId, profileId: source.profileId, fabricNote: source.fabricNote, fabricId: source.fabricId, sourceMakeId: source.id },
       { alterations: revision.alterations, summary: `Started from “${source.name}”, revision ${revision.number}` },
     );
     return this.detail(actor, newId);
   }
 
-  async update(actor: Actor, id: string, input: { name?: string; profileId?: string | null; fabricNote?: string; archived?: boolean }): Promise<MakeDetailDto> {
+  async update(actor: Actor, id: string, input: { name?: string; profileId?: string | null; fabricNote?: string; fabricId?: string | null; archived?: boolean }): Promise<MakeDetailDto> {
     const make = await this.load(actor, id);
     await this.checkProfile(actor, input.profileId);
+    if (input.fabricId) await this.ownFabric(actor, input.fabricId);
     const changes: Partial<MakeEntity> = {};
     if (input.name !== undefined) changes.name = input.name;
     if (input.profileId !== undefined) changes.profileId = input.profileId;
     if (input.fabricNote !== undefined) changes.fabricNote = input.fabricNote;
+    if (input.fabricId !== undefined) changes.fabricId = input.fabricId;
     if (input.archived !== undefined) changes.archivedAt = input.archived ? (make.archivedAt ?? new Date()) : null;
     await this.repo.update({ id }, changes);
     return this.detail(actor, id);
@@ -174,26 +198,54 @@ export class MakesService {
     }
   }
 
+  /** Record how the make fit (replacing the earlier note), or with null forget it. */
+  async setFitNote(actor: Actor, id: string, note: FitNote | null): Promise<MakeEntity['fitNote']> {
+    await this.load(actor, id);
+    const fitNote = note ? { ...note, updatedAt: new Date().toISOString() } : null;
+    await this.repo.update({ id }, { fitNote });
+    return fitNote;
+  }
+
   /**
-   * The fit plan for this make: its profile's body against its pattern's finished measurements
-   * (measured from the pattern's geometry), with the fabric and options given. Nothing is saved:
-   * the person accepts the plan's alterations into the list as a revision.
+   * The fit plan for this make: its profile's body (current dated set) against the pattern's
+   * printed size table, or the finished measurements measured on its pieces; the fabric given,
+   * else the make's fabric; the fit note of the make it repeats ("sew it again"); the make's
+   * alterations now for the "before" garment. Nothing is saved: the person accepts the plan's
+   * alterations into the list as a revision.
    */
-  async plan(actor: Actor & { units?: 'in' | 'cm' }, id: string, input: { fabric?: unknown; fabricId?: string; options: Record<string, unknown> }): Promise<FitPlan> {
+  async plan(
+    actor: Actor & { units?: 'in' | 'cm' },
+    id: string,
+    input: { fabric?: unknown; fabricId?: string; options: Record<string, unknown>; chart?: 'printed' | 'measured' },
+  ): Promise<{ plan: FitPlan; previous: { makeId: string; makeName: string; fitNote: NonNullable<MakeEntity['fitNote']> } | null }> {
     const make = await this.load(actor, id);
     let fabric = input.fabric;
-    if (input.fabricId !== undefined) {
-      const kept = await this.db.getRepository(FabricEntity).findOneBy({ id: input.fabricId });
-      if (!kept) throw new AppError('invalid_input', 'That fabric does not exist.', 400, { fabricId: 'No such fabric.' });
-      if (kept.ownerId !== actor.id) throw forbidden('That fabric belongs to someone else.');
-      fabric = kept.properties;
-    }
+    const fabricId = input.fabric === undefined ? (input.fabricId ?? make.fabricId ?? undefined) : undefined;
+    if (fabricId !== undefined) fabric = (await this.ownFabric(actor, fabricId)).properties;
     if (!make.profileId) throw new AppError('conflict', 'This make has no measurement profile: choose one before planning.', 409);
     const profile = await this.db.getRepository(ProfileEntity).findOneBy({ id: make.profileId });
     if (!profile) throw new AppError('conflict', 'This make has no measurement profile: choose one before planning.', 409);
-    const { pattern } = await this.patterns.loadVisible(actor, make.patternId);
+    const { entity, pattern } = await this.patterns.loadVisible(actor, make.patternId);
+    if (input.chart === 'printed' && !entity.sizeChart)
+      throw new AppError('invalid_input', 'This pattern has no printed size table: type it in on the pattern, or plan from the pieces.', 400, { chart: 'No printed size table.' });
+    const chart = input.chart !== 'measured' && entity.sizeChart ? entity.sizeChart : undefined;
+    // the make this one repeats, when it is still the same person's and has a note
+    const source = make.sourceMakeId ? await this.repo.findOneBy({ id: make.sourceMakeId, ownerId: actor.id }) : null;
+    const previous = source?.fitNote ? { makeId: source.id, makeName: source.name, fitNote: source.fitNote } : null;
+    const revision = await this.revisionEntity(make.id, make.latestRevision);
+    const current: AlterationOp[] = revision.alterations.filter((e) => e.enabled).map((e) => e.op);
     try {
-      return planFit({ unit: actor.units ?? 'cm', ...input.options, profile: { name: profile.name, measurements: profile.measurements }, pattern, ...(fabric !== undefined ? { fabric } : {}) });
+      const plan = planFit({
+        unit: actor.units ?? 'cm',
+        ...input.options,
+        profile: { name: profile.name, measurements: profile.measurements, girthsAtHeights: profile.girthsAtHeights },
+        pattern,
+        current,
+        ...(chart ? { chart } : {}),
+        ...(fabric !== undefined ? { fabric } : {}),
+        ...(previous ? { previous: { note: { levels: previous.fitNote.levels, nextTime: previous.fitNote.nextTime }, makeName: previous.makeName } } : {}),
+      });
+      return { plan, previous };
     } catch (e) {
       if (e instanceof FitInputError) throw new AppError('invalid_input', `The plan cannot be made: ${e.message}`, 400, { plan: e.message });
       throw e;

@@ -1,4 +1,5 @@
 import { Column, Entity } from 'typeorm';
+import type { SizeChart } from '../../../geometry/index.ts';
 import { OwnedEntity } from '../../db/owned-entity.ts';
 
 export const PATTERN_SOURCES = ['svg', 'dxf', 'json', 'demo'] as const;
@@ -28,6 +29,10 @@ export class PatternEntity extends OwnedEntity {
   /** What the importer guessed and the person should check. */
   @Column('jsonb', { name: 'import_notes' })
   importNotes: string[];
+
+  /** The size table printed with the pattern (finished and body measurements per size), typed in by its owner. */
+  @Column('jsonb', { name: 'size_chart', nullable: true })
+  sizeChart: SizeChart | null;
 
   /** Set when a coach published it to the shared library. */
   @Column('timestamptz', { name: 'published_at', nullable: true })

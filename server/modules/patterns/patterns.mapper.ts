@@ -1,4 +1,4 @@
-import type { Pattern } from '../../../geometry/index.ts';
+import type { Pattern, SizeChart } from '../../../geometry/index.ts';
 import type { PatternEntity } from './pattern.entity.ts';
 
 export interface PatternSummaryDto {
@@ -9,6 +9,8 @@ export interface PatternSummaryDto {
   sourceName: string;
   pieceCount: number;
   sizes: string[];
+  /** Has its owner typed in the size table printed with it? */
+  hasSizeChart: boolean;
   published: boolean;
   publishedAt: string | null;
   createdAt: string;
@@ -30,6 +32,7 @@ export const toPatternSummaryDto = (p: PatternEntity, ownerName: string): Patter
   sourceName: p.sourceName,
   pieceCount: p.pieceCount,
   sizes: p.sizes,
+  hasSizeChart: p.sizeChart !== null,
   published: p.publishedAt !== null,
   publishedAt: p.publishedAt?.toISOString() ?? null,
   createdAt: p.createdAt.toISOString(),
@@ -42,3 +45,11 @@ export const toPatternDetailDto = (p: PatternEntity, ownerName: string, canEdit:
   canEdit,
   pattern,
 });
+
+/** A pattern's size tables: the printed one (typed by its owner) and the one measured on its pieces. */
+export interface SizeChartsDto {
+  printed: SizeChart | null;
+  measured: SizeChart | null;
+  /** Why the pieces could not be measured, when `measured` is null. */
+  measuredError?: string;
+}

@@ -3,7 +3,7 @@ import { currentUser, requireUser } from '../../http/guards.ts';
 import { parseInput } from '../../http/parse.ts';
 import { singlePatternFile } from '../../http/upload.ts';
 import { idParamsSchema } from '../users/users.schemas.ts';
-import { listQuerySchema, updatePatternSchema, uploadFieldsSchema } from './patterns.schemas.ts';
+import { listQuerySchema, putSizeChartSchema, sizeChartQuerySchema, updatePatternSchema, uploadFieldsSchema } from './patterns.schemas.ts';
 import type { PatternsService } from './patterns.service.ts';
 
 /** Patterns: upload (multipart field `file`), list mine or the shared library, read, label, publish, delete. */
@@ -31,6 +31,24 @@ export function patternsRouter(deps: { patterns: PatternsService }): Router {
     const { id } = parseInput(idParamsSchema, req.params, 'address');
     const input = parseInput(updatePatternSchema, req.body, 'pattern change');
     res.json({ pattern: await deps.patterns.update(currentUser(req), id, input) });
+  });
+
+  router.get('/:id/size-chart', async (req, res) => {
+    const { id } = parseInput(idParamsSchema, req.params, 'address');
+    const { seamAllowance } = parseInput(sizeChartQuerySchema, req.query, 'query');
+    res.json(await deps.patterns.sizeCharts(currentUser(req), id, seamAllowance));
+  });
+
+  router.put('/:id/size-chart', async (req, res) => {
+    const { id } = parseInput(idParamsSchema, req.params, 'address');
+    const { chart } = parseInput(putSizeChartSchema, req.body, 'size table');
+    res.json({ printed: await deps.patterns.setSizeChart(currentUser(req), id, chart) });
+  });
+
+  router.delete('/:id/size-chart', async (req, res) => {
+    const { id } = parseInput(idParamsSchema, req.params, 'address');
+    await deps.patterns.setSizeChart(currentUser(req), id, null);
+    res.status(204).end();
   });
 
   router.delete('/:id', async (req, res) => {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { sizeChartSchema } from '../../../geometry/index.ts';
 
 export const patternNameSchema = z
   .string({ error: 'Enter a name for the pattern.' })
@@ -24,3 +25,11 @@ export const updatePatternSchema = z
   .refine((v) => v.name !== undefined || v.pattern !== undefined || v.published !== undefined, {
     message: 'Send a name, a pattern or published.',
   });
+
+/** The pattern's printed size table (geometry/fit/chart.ts), replaced whole. */
+export const putSizeChartSchema = z.object({ chart: sizeChartSchema }).strict();
+
+/** Seam allowance (mm) to take off pieces that include it when measuring the pieces. */
+export const sizeChartQuerySchema = z.object({
+  seamAllowance: z.coerce.number({ error: 'seamAllowance must be a number of millimetres.' }).min(0, 'seamAllowance must be 0 mm or more.').max(100, 'seamAllowance must be 100 mm or less.').optional(),
+});

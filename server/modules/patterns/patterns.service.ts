@@ -2,6 +2,7 @@ import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import {
   DxfImportError,
+  FitInputError,
   type Pattern,
   PatternError,
   SvgImportError,
@@ -9,13 +10,15 @@ import {
   importDxf,
   importSvg,
   parsePattern,
+  type SizeChart,
+  chartFromPattern,
   patternSizes,
 } from '../../../geometry/index.ts';
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import type { Role } from '../users/user.entity.ts';
 import { UserEntity } from '../users/user.entity.ts';
 import { type PatternSource, PatternEntity } from './pattern.entity.ts';
-import { type PatternDetailDto, type PatternSummaryDto, toPatternDetailDto, toPatternSummaryDto } from './patterns.mapper.ts';
+import { type PatternDetailDto, type PatternSummaryDto, type SizeChartsDto, toPatternDetailDto, toPatternSummaryDto } from './patterns.mapper.ts';
 
 export interface Actor {
   id: string;
@@ -160,6 +163,29 @@ export class PatternsService {
     // Built here, not through detail(): a moderator who just withdrew a pattern may no longer see it.
     const names = await this.ownerNames([saved.ownerId]);
     return toPatternDetailDto(saved, names.get(saved.ownerId) ?? 'someone', owner, parsePattern(saved.data));
+  }
+
+  /**
+   * The printed size table (null until the owner types one) and the finished measurements
+   * measured on the pieces (null, with the reason, when the pieces cannot be measured).
+   */
+  async sizeCharts(actor: Actor, id: string, seamAllowance: number | undefined): Promise<SizeChartsDto> {
+    const { entity, pattern } = await this.loadVisible(actor, id);
+    try {
+      return { printed: entity.sizeChart, measured: chartFromPattern(pattern, seamAllowance !== undefined ? { seamAllowance } : {}) };
+    } catch (e) {
+      if (e instanceof FitInputError) return { printed: entity.sizeChart, measured: null, measuredError: `The pieces cannot be measured: ${e.message}.` };
+      throw e;
+    }
+  }
+
+  /** Replace (or with null, clear) the printed size table: the owner only. */
+  async setSizeChart(actor: Actor, id: string, chart: SizeChart | null): Promise<SizeChart | null> {
+    const { entity } = await this.loadVisible(actor, id);
+    if (entity.ownerId !== actor.id) throw forbidden('Only the owner of a pattern may change its size table.');
+    const printed = chart ? { ...chart, source: 'printed' as const } : null;
+    await this.repo.update({ id }, { sizeChart: printed });
+    return printed;
   }
 
   async remove(actor: Actor, id: string): Promise<void> {
