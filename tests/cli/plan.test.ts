@@ -32,6 +32,22 @@ describe('npx blockwright plan', () => {
     expect(() => applyOps(parsePattern(demoPattern()), plan.ops)).not.toThrow();
   });
 
+  it('when the last make\'s note says ½ in too tight at the hip, then the hip gets ½ in more ease and a bad note is one clear line', () => {
+    const profile = write('noted.json', { waistGirth: 720, hipGirth: 960 });
+    const table = write('chart-n.json', chart);
+    const plain = JSON.parse(cli('plan', '--profile', profile, '--chart', table).stdout) as FitPlan;
+    const res = cli('plan', '--profile', profile, '--chart', table, '--notes', write('note.json', { levels: { hip: { verdict: 'tight', amount: MM_PER_INCH / 2 } }, nextTime: 'roomier seat' }));
+    expect(res.status, res.stderr).toBe(0);
+    const noted = JSON.parse(res.stdout) as FitPlan;
+    const hip = (p: FitPlan) => p.levels.find((l) => l.level === 'hip')!;
+    expect(hip(noted).ease - hip(plain).ease).toBeCloseTo(MM_PER_INCH / 2, 9);
+    expect(noted.cautions.join('\n')).toMatch(/roomier seat/);
+    const bad = cli('plan', '--profile', profile, '--chart', table, '--notes', write('bad-note.json', { levels: { hip: { verdict: 'snug' } } }));
+    expect(bad.status).not.toBe(0);
+    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
+    expect(bad.stderr).toMatch(/levels\.hip\.verdict/);
+  });
+
   it('when a chart, a waist offset in inches and a fit are given, then the waist size comes from the girth at that height (issue 6 trade fact; common practice, no source)', () => {
     const profile = write('raised.json', { waistGirth: 740, hipGirth: 990, girthsAtHeights: [{ offset: 2 * MM_PER_INCH, girth: 700 }] });
     const res = cli('plan', '--profile', profile, '--chart', write('chart.json', chart), '--waist-offset', '2in', '--fit', 'close', '--out', path.join(dir, 'plan.json'));

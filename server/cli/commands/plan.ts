@@ -41,7 +41,8 @@ export const planCommand: Command = {
     'Usage: npx blockwright plan --profile p.json (--pattern pattern.json | --chart chart.json)',
     '         [--pattern pattern.json] [--fabric f.json] [--fit close|regular|relaxed]',
     '         [--waist-offset 2in] [--inseam-offset -3cm] [--stretch-share 0.5]',
-    '         [--seam-allowance 15] [--size waist=0 …] [--unit cm|in] [--out plan.json]',
+    '         [--seam-allowance 15] [--size waist=0 …] [--notes note.json]',
+    '         [--unit cm|in] [--out plan.json]',
     '',
     'Compares the body (profile, ISO 8559-1 names, mm) plus ease with the finished-garment',
     'measurements of each size (the size table, or measured on the pattern when none is given)',
@@ -49,7 +50,9 @@ export const planCommand: Command = {
     'alterations (blend, rise, lengthen, girth, shrinkage) ready for `npx blockwright alter`,',
     'and cautions. --waist-offset: where the waistband will sit above (+) or below (−) the',
     'natural waist. --size LEVEL=SIZE (repeatable): a size you have chosen at a level; the',
-    'plan checks it and suggests a girth change if it misses. Lengths in options are',
+    'plan checks it and suggests a girth change if it misses. --notes: how the last make',
+    'fit ({ "levels": { "hip": { "verdict": "tight", "amount": 10 }, … }, "nextTime": "…" });',
+    'its amounts become more or less ease, rise and leg length. Lengths in options are',
     'millimetres unless a unit is written.',
     'Sizing advice is guidance, not a guarantee of fit: sew a test garment first.',
   ].join('\n'),
@@ -65,6 +68,7 @@ export const planCommand: Command = {
       'stretch-share': { type: 'string' },
       'seam-allowance': { type: 'string' },
       size: { type: 'string', multiple: true },
+      notes: { type: 'string' },
       unit: { type: 'string' },
       out: { type: 'string' },
     });
@@ -83,6 +87,7 @@ export const planCommand: Command = {
     const pattern = values.pattern ? readJson(values.pattern) : undefined;
     const chart = values.chart ? readJson(values.chart) : undefined;
     const fabric = values.fabric ? readJson(values.fabric) : undefined;
+    const note = values.notes ? readJson(values.notes) : undefined;
     const plan = planFit({
       profile,
       ...(pattern !== undefined ? { pattern } : {}),
@@ -94,6 +99,7 @@ export const planCommand: Command = {
       ...(seamAllowance !== undefined ? { seamAllowance } : {}),
       ...(stretchShare !== undefined ? { stretchShare } : {}),
       ...(sizes !== undefined ? { sizes } : {}),
+      ...(note !== undefined ? { previous: { note } } : {}),
       ...(values.unit !== undefined ? { unit: values.unit as 'cm' | 'in' } : {}),
     });
     writeJson(plan, values.out, io.stdout);
