@@ -61,8 +61,8 @@ export const areas: readonly Area[] = [
     to: paths.fitPlanner.build(),
     group: 'work',
     summary:
-      'Compare your body measurements with the finished garment at waist, hip, thigh, knee, calf and hem, allowing for ease and the fabric’s stretch and shrinkage, and get a size per level with the reason for each suggested change.',
-    built: false,
+      'Keep measurement profiles for yourself and the people you sew for, each a dated history with the change since last time, including girths where a raised or lowered waistband sits; a make’s workspace plans a size per level from them.',
+    built: true,
   },
   {
     id: 'fabrics',
@@ -70,8 +70,8 @@ export const areas: readonly Area[] = [
     to: paths.fabrics.build(),
     group: 'work',
     summary:
-      'Keep a record of your cloths — width, crosswise stretch, shrinkage after washing — so plans and fabric-length estimates take the real cloth into account.',
-    built: false,
+      'Keep a record of your cloths — stretch each way from a hand test, recovery, weight in g/m² or oz/yd², width, shrinkage from a wash test — and see when a plan will suggest pre-washing or enlarging the pieces.',
+    built: true,
   },
   {
     id: 'library',

@@ -126,8 +126,26 @@ export function createRouter(queryClient: QueryClient) {
                   },
                   lazy: page(() => import('./routes/pattern-review'), (m) => m.PatternReviewRoute),
                 },
-                { path: child(paths.fitPlanner.pattern), lazy: areaComing('fitPlanner') },
-                { path: child(paths.fabrics.pattern), lazy: areaComing('fabrics') },
+                {
+                  path: child(paths.fitPlanner.pattern),
+                  loader: async ({ request }) => {
+                    await requireUser(queryClient, request);
+                    const { profilesQueryOptions } = await import('../features/profiles/api/get-profiles');
+                    await queryClient.ensureQueryData(profilesQueryOptions());
+                    return null;
+                  },
+                  lazy: page(() => import('./routes/fit-planner'), (m) => m.FitPlannerRoute),
+                },
+                {
+                  path: child(paths.fabrics.pattern),
+                  loader: async ({ request }) => {
+                    await requireUser(queryClient, request);
+                    const { fabricsQueryOptions } = await import('../features/fabrics/api/get-fabrics');
+                    await queryClient.ensureQueryData(fabricsQueryOptions());
+                    return null;
+                  },
+                  lazy: page(() => import('./routes/fabrics'), (m) => m.FabricsRoute),
+                },
                 {
                   path: child(paths.library.pattern),
                   loader: async ({ request }) => {

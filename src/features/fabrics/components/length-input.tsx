@@ -1,0 +1,96 @@
+import { useId } from 'react';
+import { formatLength, parseLength, type LengthUnit } from '../../../../geometry/units';
+import { cx } from '../../../lib/cx';
+
+/** What a typed length reads as in the person's units, or null when it is blank or not a length. */
+function readBack(text: string, unit: LengthUnit): string | null {
+  if (text.trim() === '') return null;
+  try {
+    return formatLength(parseLength(text, unit), unit);
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * A length typed in the person's units that may be left blank ("not measured"). It reads like
+ * the shared LengthField (`2 1/2`, `2.5in`, `6.35 cm`, `63.5mm`, geometry/units.ts) and shows
+ * what it read, but keeps the text as typed until the form is sent, so a blank stays blank and
+ * the server's message for the field can be shown beside it. (The same component is in the
+ * profiles feature: features do not import each other.)
+ */
+export function LengthInput({
+  label,
+  hint,
+  value,
+  unit,
+  onChange,
+  error,
+  name,
+  className,
+}: {
+  label: string;
+  hint?: string;
+  value: string;
+  unit: LengthUnit;
+  onChange: (text: string) => void;
+  error?: string;
+  /** The field's key as the API names it (for tests and error focus). */
+  name?: string;
+  className?: string;
+}) {
+  const id = useId();
+  const hintId = hint ? `${id}-hint` : undefined;
+  const errorId = error ? `${id}-error` : undefined;
+  const shown = error ? null : readBack(value, unit);
+  const readsAsId = shown && shown !== value.trim() ? `${id}-reads` : undefined;
+  return (
+    <div className={cx('flex flex-col gap-1', className)}>
+      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
+        {label}
+      </label>
+      {hint && (
+        <p id={hintId} className="text-xs text-ink-500">
+          {hint}
+        </p>
+      )}
+      <input
+        id={id}
+        name={name}
+        inputMode="text"
+        autoComplete="off"
+        placeholder={unit === 'in' ? 'e.g. 32 1/2' : 'e.g. 82.5'}
+        value={value}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={[hintId, errorId, readsAsId].filter(Boolean).join(' ') || undefined}
+        onChange={(event) => onChange(event.target.value)}
+        className={cx(
+          'rounded-md border bg-calico-50 px-3 py-1.5 text-base tabular-nums text-ink-900 placeholder:text-ink-500/60 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
+          error ? 'border-madder-700' : 'border-calico-400',
+        )}
+      />
+      {readsAsId && (
+        <p id={readsAsId} className="text-xs text-ink-500">
+          Reads as {shown}
+        </p>
+      )}
+      {error && (
+        <p id={errorId} className="flex items-start gap-1.5 text-sm font-medium text-madder-700">
+          <span aria-hidden className="mt-1.5 size-2 shrink-0 rotate-45 bg-madder-700" />
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}
+
+/** A message under a group of fields, in the look of the shared fields' errors. */
+export function FieldError({ id, children }: { id?: string; children?: string }) {
+  if (!children) return null;
+  return (
+    <p id={id} className="flex items-start gap-1.5 text-sm font-medium text-madder-700">
+      <span aria-hidden className="mt-1.5 size-2 shrink-0 rotate-45 bg-madder-700" />
+      {children}
+    </p>
+  );
+}
