@@ -193,3 +193,27 @@ export function chartFromPattern(pattern: Pattern, options: ChartFromPatternOpti
   });
   return parseSizeChart({ name: pattern.name ? `${pattern.name} (measured)` : undefined, source: 'geometry', sizes: chartSizes, notes });
 }
+
+/**
+ * A printed table with its gaps filled from another (the one measured on the pieces): for each
+ * size both tables have, a finished measurement the printed table leaves out is taken from the
+ * other, and `notes` says which. The printed numbers themselves are never changed.
+ */
+export function fillChartGaps(printed: SizeChart, measured: SizeChart): SizeChart {
+  const filled = new Map<string, string[]>();
+  const sizes = printed.sizes.map((s) => {
+    const other = measured.sizes.find((m) => m.size === s.size);
+    if (!other) return s;
+    const garment = { ...s.garment };
+    for (const k of [...GIRTH_LEVELS, ...LENGTH_MEASURES]) {
+      if (garment[k] === undefined && other.garment[k] !== undefined) {
+        garment[k] = other.garment[k];
+        filled.set(k, [...(filled.get(k) ?? []), s.size]);
+      }
+    }
+    return { ...s, garment };
+  });
+  if (filled.size === 0) return printed;
+  const words = [...filled].map(([k, on]) => `${k} (size${on.length > 1 ? 's' : ''} ${on.join(', ')})`).join('; ');
+  return { ...printed, sizes, notes: [...printed.notes, `Not in the printed table, measured on the pieces: ${words}.`] };
+}

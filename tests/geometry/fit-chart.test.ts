@@ -7,6 +7,7 @@ import {
   FitInputError,
   type Piece,
   chartFromPattern,
+  fillChartGaps,
   demoGrade,
   demoPattern,
   edgeLength,
@@ -141,5 +142,17 @@ describe('chartFromPattern', () => {
     expect(() => chartFromPattern(pocket)).toThrow(/no leg pieces/);
     expect(() => parseSizeChart({ sizes: [{ size: '8', garment: { hip: 1000 } }, { size: '8', garment: { hip: 1040 } }] })).toThrow(/size "8" appears twice/);
     expect(() => parseSizeChart({ sizes: [{ size: '8', garment: { hip: -1 } }] })).toThrow(/sizes\[0\]\.garment\.hip/);
+  });
+});
+
+describe('fillChartGaps', () => {
+  it('fills only what the printed table leaves out, for sizes both tables have, and says so; printed numbers stay', () => {
+    const printed = parseSizeChart({ sizes: [{ size: '8', garment: { hip: 1000 } }, { size: '9', garment: { hip: 1020 } }] });
+    const measured = parseSizeChart({ source: 'geometry', sizes: [{ size: '8', garment: { hip: 990, thigh: 600, inseam: 800 } }] });
+    const filled = fillChartGaps(printed, measured);
+    expect(filled.sizes[0]!.garment).toEqual({ hip: 1000, thigh: 600, inseam: 800 });
+    expect(filled.sizes[1]!.garment).toEqual({ hip: 1020 });
+    expect(filled.notes.join(' ')).toMatch(/measured on the pieces: thigh \(size 8\); inseam \(size 8\)/);
+    expect(fillChartGaps(measured, measured)).toBe(measured);
   });
 });

@@ -7,7 +7,10 @@ import {
   type FitPlan,
   FitInputError,
   type Pattern,
+  type SizeChart,
   alterationEntriesSchema,
+  chartFromPattern,
+  fillChartGaps,
   planFit,
   replayAlterations,
 } from '../../../geometry/index.ts';
@@ -198,6 +201,16 @@ export class MakesService {
     }
   }
 
+  /** The printed table, with what it leaves out measured on the pieces (when they can be measured). */
+  private printedWithGaps(printed: SizeChart, pattern: Pattern): SizeChart {
+    try {
+      return fillChartGaps(printed, chartFromPattern(pattern));
+    } catch (e) {
+      if (e instanceof FitInputError) return printed;
+      throw e;
+    }
+  }
+
   /** Record how the make fit (replacing the earlier note), or with null forget it. */
   async setFitNote(actor: Actor, id: string, note: FitNote | null): Promise<MakeEntity['fitNote']> {
     await this.load(actor, id);
@@ -228,7 +241,7 @@ export class MakesService {
     const { entity, pattern } = await this.patterns.loadVisible(actor, make.patternId);
     if (input.chart === 'printed' && !entity.sizeChart)
       throw new AppError('invalid_input', 'This pattern has no printed size table: type it in on the pattern, or plan from the pieces.', 400, { chart: 'No printed size table.' });
-    const chart = input.chart !== 'measured' && entity.sizeChart ? entity.sizeChart : undefined;
+    const chart = input.chart !== 'measured' && entity.sizeChart ? this.printedWithGaps(entity.sizeChart, pattern) : undefined;
     // the make this one repeats, when it is still the same person's and has a note
     const source = make.sourceMakeId ? await this.repo.findOneBy({ id: make.sourceMakeId, ownerId: actor.id }) : null;
     const previous = source?.fitNote ? { makeId: source.id, makeName: source.name, fitNote: source.fitNote } : null;
