@@ -192,6 +192,11 @@ export interface PlannedLevel {
   readonly change: number;
   readonly reason: string;
   readonly confidence: Confidence;
+  /**
+   * The size the table's printed body chart gives for this body at this level (the pattern's
+   * own ease assumed), when the table has a body chart there: to compare with `size`.
+   */
+  readonly bodyChartSize?: string;
 }
 
 export interface PlanStep {
@@ -442,8 +447,27 @@ export function planFit(input: PlanInput): FitPlan {
         ? `size ${size} measures ${L(garment)}${reduction > 0 && garment > target + FIT_GIRTH_TOLERANCE ? ', within what the stretch absorbs' : ''}`
         : `size ${size} measures ${L(garment)}, ${L(Math.abs(change))} too ${change > 0 ? 'small' : 'big'}: ${change > 0 ? 'let out' : 'take in'} ${L(Math.abs(change))}`;
     const easeWords = fromNote !== 0 ? `${L(ease)} ease (${fromNote > 0 ? 'with' : 'less'} ${L(Math.abs(fromNote))} for the note on ${noteFrom})` : `${L(ease)} ease`;
-    const reason = `${level[0]!.toUpperCase()}${level.slice(1)}: ${where} + ${easeWords} = ${L(comfort)}${stretchWords}; ${sizeWords}.`;
-    levels.push({ level, body, bodyFrom, offset, ease, easeSource, stretchReduction: reduction, target, comfort, size, sizeFrom, garmentAtSize: garment, change, reason, confidence });
+    const bodyChartSize = scale.numeric ? sizeByBodyChart(scale, BODY_KEY[level], body) : undefined;
+    const chartWords = bodyChartSize !== undefined && bodyChartSize !== size ? ` (The printed body chart says size ${bodyChartSize} for this body.)` : '';
+    const reason = `${level[0]!.toUpperCase()}${level.slice(1)}: ${where} + ${easeWords} = ${L(comfort)}${stretchWords}; ${sizeWords}.${chartWords}`;
+    levels.push({
+      level,
+      body,
+      bodyFrom,
+      offset,
+      ease,
+      easeSource,
+      stretchReduction: reduction,
+      target,
+      comfort,
+      size,
+      sizeFrom,
+      garmentAtSize: garment,
+      change,
+      reason,
+      confidence,
+      ...(bodyChartSize !== undefined ? { bodyChartSize } : {}),
+    });
 
     if (beyond > 0)
       caution(
@@ -595,6 +619,23 @@ export function planFit(input: PlanInput): FitPlan {
   caution('Sizing advice is guidance, not a guarantee of fit: sew a test garment before cutting the good cloth.');
 
   return { units: 'mm', fit: opts.fit, levels, ops: steps.map((s) => s.op), steps, cautions, chart, ...(fabric ? { fabric } : {}), garment: { before, after }, fromPrevious };
+}
+
+/**
+ * The size the printed body chart gives for a body girth: linear between the two neighbouring
+ * sizes like the finished measurements, at most one grade step beyond the table; undefined when
+ * the chart has fewer than two body values there or they do not grow with the size.
+ */
+function sizeByBodyChart(scale: SizeScale, key: (typeof BODY_KEY)[FitLevel], body: number): string | undefined {
+  const pts: Pt[] = [];
+  scale.sizes.forEach((s, i) => {
+    const y = s.body?.[key];
+    if (y !== undefined) pts.push({ x: scale.values[i]!, y });
+  });
+  if (pts.length < 2 || !pts.every((p, i) => i === 0 || p.y > pts[i - 1]!.y)) return undefined;
+  const lo = pts[0]!.x - MAX_EXTRAPOLATION_STEPS * (pts[1]!.x - pts[0]!.x);
+  const hi = pts[pts.length - 1]!.x + MAX_EXTRAPOLATION_STEPS * (pts[pts.length - 1]!.x - pts[pts.length - 2]!.x);
+  return labelOf(scale, roundSize(Math.min(hi, Math.max(lo, sizeAt(pts, body)))));
 }
 
 /** The finished girths of a pattern that has one outline per piece (after a blend); null otherwise. */

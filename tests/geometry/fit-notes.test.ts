@@ -117,3 +117,22 @@ describe('the garment before and after a plan, measured on the pieces', () => {
     expect(plan.garment).toEqual({ before: null, after: null });
   });
 });
+
+describe('the printed body chart beside the plan', () => {
+  it('gives the size the body chart names for this body, to compare with the planned size (and the reason says so when they differ)', () => {
+    // an invented table whose body chart assumes 60 mm of ease at the hip (more than regular ease)
+    const table = {
+      sizes: [0, 2, 4, 6, 8].map((s) => ({ size: String(s), garment: { hip: 950 + 20 * s }, body: { hipGirth: 890 + 20 * s } })),
+    };
+    const plan = planFit({ profile: { hipGirth: 930 }, chart: table });
+    const hip = plan.levels.find((l) => l.level === 'hip')!;
+    // body chart: 930 = 890 + 20 × 2 → size 2
+    expect(hip.bodyChartSize).toBe('2');
+    // finished measurements: 930 + 50.8 regular ease = 980.8 = 950 + 20 × 1.54 → size 1.5
+    expect(hip.size).toBe('1.5');
+    expect(hip.reason).toMatch(/printed body chart says size 2/);
+    // between printed sizes it interpolates like the finished measurements; no body chart, no field
+    expect(planFit({ profile: { hipGirth: 940 }, chart: table }).levels[0]!.bodyChartSize).toBe('2.5');
+    expect(planFit({ profile: { hipGirth: 940 }, chart: { sizes: table.sizes.map(({ size, garment }) => ({ size, garment })) } }).levels[0]!.bodyChartSize).toBeUndefined();
+  });
+});
