@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import type { chartInputFromDraft } from '../model/size-chart';
-import { sizeChartKeys, sizeChartSchema, type SizeChart } from './get-size-chart';
+import { sizeChartKeys, sizeChartSchema, type SizeChart, type SizeCharts } from './get-size-chart';
 
 export type SizeChartInput = ReturnType<typeof chartInputFromDraft>;
 
@@ -18,7 +18,11 @@ export function useSaveSizeChart() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: saveSizeChart,
-    onSuccess: (_printed, { patternId }) => void queryClient.invalidateQueries({ queryKey: sizeChartKeys.all(patternId) }),
+    onSuccess: (printed, { patternId }) => {
+      // Shown at once (the measured side is unchanged), then checked with the server.
+      queryClient.setQueriesData<SizeCharts>({ queryKey: sizeChartKeys.all(patternId) }, (old) => (old ? { ...old, printed } : old));
+      void queryClient.invalidateQueries({ queryKey: sizeChartKeys.all(patternId) });
+    },
   });
 }
 

@@ -39,7 +39,7 @@ const measuredHelper = createColumnHelper<typeof features, MeasuredRow>();
 
 const inputClasses = (invalid: boolean) =>
   cx(
-    'w-full min-w-16 rounded border bg-calico-50 px-1.5 py-1 text-right tabular-nums text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
+    'w-full min-w-[5.5rem] rounded border bg-calico-50 px-1.5 py-1 text-right tabular-nums text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
     invalid ? 'border-madder-700' : 'border-calico-400',
   );
 
@@ -107,7 +107,7 @@ function Difference({ d, unit }: { d: CellDifference; unit: LengthUnit }) {
       data-over={d.over ? 'true' : 'false'}
       data-mm={d.difference.toFixed(2)}
       title={`Printed ${formatLength(d.printed, unit)}, measured on the pieces ${formatLength(d.measured, unit)}`}
-      className={cx('mt-0.5 block text-right text-xs tabular-nums', d.over ? 'rounded bg-madder-50 px-1 font-semibold text-madder-700' : 'text-ink-500')}
+      className={cx('mt-0.5 block whitespace-nowrap text-right text-xs tabular-nums', d.over ? 'rounded bg-madder-50 px-1 font-semibold text-madder-700' : 'text-ink-500')}
     >
       <span className="sr-only">printed minus measured: </span>
       {d.over && (
@@ -198,7 +198,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
                 {canEdit ? (
                   <CellInput label={label} valueMm={value} unit={units} onCommit={(mm) => setCell(row.index, column.key, mm)} onProblem={problem(`${row.index}/${column.key}`)} />
                 ) : (
-                  <span className="block text-right tabular-nums" data-mm={value?.toFixed(2)}>
+                  <span className="block whitespace-nowrap text-right tabular-nums" data-mm={value?.toFixed(2)}>
                     {showCell(value, units) || '—'}
                   </span>
                 )}
@@ -237,7 +237,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
           id: column.key,
           header: column.label,
           cell: (info) => (
-            <span className="block text-right tabular-nums" data-mm={info.getValue()?.toFixed(2)}>
+            <span className="block whitespace-nowrap text-right tabular-nums" data-mm={info.getValue()?.toFixed(2)}>
               {showCell(info.getValue(), units) || '—'}
             </span>
           ),
@@ -287,7 +287,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
         </div>
       </header>
 
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      <div className="flex flex-col gap-8">
         <div className="flex min-w-0 flex-col gap-3">
           <h3 className="font-semibold text-ink-900">Printed {kind === 'garment' ? 'finished measurements' : 'body chart (ISO 8559-1 names)'}</h3>
           {draft.sizes.length === 0 ? (
