@@ -249,6 +249,8 @@ describe('shrinkage advice', () => {
     expect(shrinkageAdvice(7, 2, false).kind).toBe('compensate');
     expect(shrinkageAdvice(7.5, 2, false).kind).toBe('prewash');
     expect(shrinkageAdvice(7.5, 2, true).kind).toBe('prewashed');
+    expect(shrinkageAdvice(3.75, undefined, false).text).toBe('Plans will enlarge the pieces by 1 / (1 − s): 3.8 % along the warp, nothing recorded across.');
+    expect(shrinkageAdvice(-1, 8, false).text).toMatch(/−1 % along the warp, 8 % across\. Over 7 %: plans will also advise pre-washing/);
   });
 
   it('says what geometry\'s planner does with the same cloth on the demo pattern (boundaries, then random cloths)', () => {

@@ -2,8 +2,8 @@
  * Browser test of the fit planner's profiles and the fabrics page as Rui (demo sewist, inches):
  * a profile with several measurements and a girth below the waist, measured again later with
  * one change, both dates in the history with the change; a fabric with a hand stretch test, a
- * weight in oz/yd² and a wash test, shown as % and g/m²; both found again after a reload; a
- * server refusal shown beside its field; rename, edit and delete.
+ * weight in oz/yd² and a wash test, shown as % and g/m²; both found again after a reload;
+ * server refusals (staged) shown beside their fields; rename, edit and delete.
  *
  * Outside references: 1 in = 25.4 mm exactly (international yard and pound agreement, 1959);
  * 12 oz/yd² = 406.9 g/m² (trade reference §6.8 [calc], from the exact ounce and yard);
@@ -64,6 +64,7 @@ describe('when Rui keeps measurement profiles', () => {
     await page.getByLabel('Height 1: girth there').fill('35');
     await page.getByLabel('Taken on').fill('2026-01-10');
     await page.getByLabel('Note (optional)').fill('Measured by a friend');
+    await page.screenshot({ path: path.join(screenshotDir, 'fit-planner-new-profile.png'), fullPage: true });
     await page.getByRole('button', { name: 'Save the profile' }).click();
     await page.getByRole('heading', { name: 'Rui, winter', level: 2 }).waitFor();
 
@@ -89,6 +90,22 @@ describe('when Rui keeps measurement profiles', () => {
     await page.getByLabel('Waist girth', { exact: true }).fill('33');
     await page.getByLabel('Taken on').fill('2026-02-20');
     await page.getByLabel('Note (optional)').fill('After the holidays');
+    // A refusal from the server lands beside the field it names (the answer is staged once).
+    await page.route(
+      `**/api/profiles/${created!.id}`,
+      (route) =>
+        route.request().method() === 'PATCH'
+          ? route.fulfill({
+              status: 400,
+              contentType: 'application/json',
+              body: JSON.stringify({ error: { code: 'invalid_input', message: 'Some fields of the request are not valid.', fields: { 'girthsAtHeights.0.girth': 'must be 3 m or less' } } }),
+            })
+          : route.fallback(),
+      { times: 1 },
+    );
+    await page.getByRole('button', { name: 'Save as a new dated set' }).click();
+    await page.getByText('must be 3 m or less').waitFor();
+    expect(await page.getByLabel('Height 1: girth there').getAttribute('aria-invalid')).toBe('true');
     await page.getByRole('button', { name: 'Save as a new dated set' }).click();
     await page.getByText(/^Measurements of .+ saved\.$/).waitFor();
 
@@ -158,6 +175,7 @@ describe('when Rui records a fabric', () => {
     await page.getByLabel('Along the warp: after washing').fill('19 1/4');
     await page.getByText('Along the warp: 3.8 %').waitFor();
     expect(await page.getByLabel('What a plan does about shrinkage').innerText()).toContain('Plans will enlarge the pieces');
+    await page.screenshot({ path: path.join(screenshotDir, 'fabrics-new.png'), fullPage: true });
 
     // A refusal from the server is shown beside the field it names (the answer is staged once).
     await page.route(

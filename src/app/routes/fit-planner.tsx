@@ -30,7 +30,7 @@ export function FitPlannerRoute() {
       >
         Fit planner
       </PageHeading>
-      <div className="grid items-start gap-6 lg:grid-cols-[18rem_1fr]">
+      <div className="grid items-start gap-6 lg:grid-cols-[18rem_minmax(0,1fr)]">
         <Panel title="Profiles">
           <div className="flex flex-col gap-4">
             <ProfilesList selectedId={selectedId} onSelect={(id) => show({ profile: id })} />

@@ -94,7 +94,8 @@ export function shrinkageAdvice(warp: number | undefined, weft: number | undefin
   if (largest < MIN_SHRINKAGE) return { kind: 'below-threshold', text: `Under ${MIN_SHRINKAGE} % each way: plans leave the pieces as they are.` };
   if (prewashed)
     return { kind: 'prewashed', text: 'Marked as washed already: plans do not enlarge the pieces for this shrinkage.' };
-  const compensate = `Plans will enlarge the pieces by 1 / (1 − s): ${one(w)} % along the warp, ${one(f)} % across.`;
+  const each = [warp === undefined ? 'nothing recorded along the warp' : `${one(w)} % along the warp`, weft === undefined ? 'nothing recorded across' : `${one(f)} % across`];
+  const compensate = `Plans will enlarge the pieces by 1 / (1 − s): ${each.join(', ')}.`;
   if (Math.max(w, f) > PREWASH_ABOVE)
     return { kind: 'prewash', text: `${compensate} Over ${PREWASH_ABOVE} %: plans will also advise pre-washing the cloth the way the garment will be washed, rather than relying on the enlargement.` };
   return { kind: 'compensate', text: compensate };

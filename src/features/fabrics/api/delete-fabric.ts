@@ -13,6 +13,8 @@ export function useDeleteFabric({ onSuccess }: { onSuccess?: (id: string) => voi
     onSuccess: async (_, id) => {
       queryClient.removeQueries({ queryKey: fabricKeys.detail(id) });
       await queryClient.invalidateQueries({ queryKey: fabricKeys.list() });
+      // The workspace's plan lists fabrics under its own key (features do not share code, only keys).
+      await queryClient.invalidateQueries({ queryKey: ['workspace', 'fabrics'] });
       // Makes may name this fabric (their fabricId).
       await queryClient.invalidateQueries({ queryKey: ['makes'] });
       onSuccess?.(id);

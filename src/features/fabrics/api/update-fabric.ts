@@ -19,6 +19,8 @@ export function useUpdateFabric({ onSuccess }: { onSuccess?: (fabric: Fabric) =>
     onSuccess: async (fabric) => {
       queryClient.setQueryData(fabricKeys.detail(fabric.id), fabric);
       await queryClient.invalidateQueries({ queryKey: fabricKeys.list() });
+      // The workspace's plan lists fabrics under its own key (features do not share code, only keys).
+      await queryClient.invalidateQueries({ queryKey: ['workspace', 'fabrics'] });
       onSuccess?.(fabric);
     },
   });

@@ -132,7 +132,7 @@ function StretchFields({
   const key = `properties.${side}` as const;
   const result = percentText(stretchFromDraft(draft, unit));
   return (
-    <fieldset className="flex flex-col gap-3 rounded-md border border-calico-300 p-4">
+    <fieldset className="flex min-w-0 flex-col gap-3 rounded-md border border-calico-300 p-4">
       <legend className="px-1 font-semibold text-ink-900">{title}</legend>
       <p className="text-xs text-ink-500">{hint}</p>
       <HowChoice
@@ -201,7 +201,7 @@ function ShrinkageFields({
   const key = `properties.shrinkage.${grain}` as const;
   const result = percentText(shrinkageFromDraft(draft, unit));
   return (
-    <fieldset className="flex flex-col gap-3 rounded-md border border-calico-300 p-4">
+    <fieldset className="flex min-w-0 flex-col gap-3 rounded-md border border-calico-300 p-4">
       <legend className="px-1 font-semibold text-ink-900">{title}</legend>
       <HowChoice
         legend={`${title}: how it is given`}

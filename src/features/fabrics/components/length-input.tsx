@@ -59,13 +59,12 @@ export function LengthInput({
         name={name}
         inputMode="text"
         autoComplete="off"
-        placeholder={unit === 'in' ? 'e.g. 32 1/2' : 'e.g. 82.5'}
         value={value}
         aria-invalid={error ? true : undefined}
         aria-describedby={[hintId, errorId, readsAsId].filter(Boolean).join(' ') || undefined}
         onChange={(event) => onChange(event.target.value)}
         className={cx(
-          'rounded-md border bg-calico-50 px-3 py-1.5 text-base tabular-nums text-ink-900 placeholder:text-ink-500/60 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
+          'rounded-md border bg-calico-50 px-3 py-1.5 text-base tabular-nums text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
           error ? 'border-madder-700' : 'border-calico-400',
         )}
       />

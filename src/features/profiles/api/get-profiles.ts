@@ -9,6 +9,7 @@ export async function getProfiles(): Promise<Profile[]> {
   return profiles;
 }
 
-export const profilesQueryOptions = () => queryOptions({ queryKey: profileKeys.list(), queryFn: getProfiles });
+/** Always checked again on opening the page: the new-make form adds profiles too, under its own key. */
+export const profilesQueryOptions = () => queryOptions({ queryKey: profileKeys.list(), queryFn: getProfiles, staleTime: 0 });
 
 export const useProfiles = () => useQuery(profilesQueryOptions());

@@ -40,7 +40,7 @@ export function MeasurementFields({
   const unitName = unit === 'in' ? 'inches' : 'centimetres';
 
   const group = (title: string, names: readonly MeasurementName[]) => (
-    <fieldset className="flex flex-col gap-3">
+    <fieldset className="flex min-w-0 flex-col gap-3">
       <legend className="mb-2 font-display text-lg font-semibold text-ink-900">{title}</legend>
       <div className="grid gap-4 sm:grid-cols-2">
         {names.map((name) => (
@@ -68,7 +68,7 @@ export function MeasurementFields({
       {group('Girths', girths)}
       {group('Lengths', lengths)}
 
-      <fieldset className="flex flex-col gap-3">
+      <fieldset className="flex min-w-0 flex-col gap-3">
         <legend className="mb-1 font-display text-lg font-semibold text-ink-900">Girths at other heights</legend>
         <p className="text-sm text-ink-700">{girthsAtHeightsWhy}</p>
         <p className="text-xs text-ink-500">{girthAtHeightHowTo}</p>
@@ -80,7 +80,7 @@ export function MeasurementFields({
                 <li
                   key={index}
                   aria-label={rowLabel}
-                  className="grid items-start gap-3 rounded-md border border-calico-300 p-3 sm:grid-cols-[1fr_auto_1fr_auto]"
+                  className="grid items-start gap-3 rounded-md border border-calico-300 p-3 sm:grid-cols-[minmax(0,1fr)_auto_minmax(0,1fr)_auto]"
                 >
                   <LengthInput
                     name={`girthsAtHeights.${index}.offset`}
