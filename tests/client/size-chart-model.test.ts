@@ -19,6 +19,7 @@ import {
   mergePasted,
   parsePastedTable,
   readCell,
+  showCell,
   unmatchedSizes,
 } from '../../src/features/patterns/model/size-chart.ts';
 
@@ -65,11 +66,19 @@ describe('reading a cell', () => {
     expect(readCell('30 3/2', 'in')).toHaveProperty('error');
   });
 
-  it('any length in inches to 1/16 reads back from its own text (property)', () => {
+  it('a cell shows the number without the unit (the heading says it)', () => {
+    expect(showCell(30.5 * IN, 'in')).toBe('30 1/2');
+    expect(showCell(775, 'cm')).toBe('77.5');
+    expect(showCell(undefined, 'cm')).toBe('');
+  });
+
+  it('any length in inches to 1/16 reads back from its own text, with or without the unit (property)', () => {
     fc.assert(
       fc.property(fc.integer({ min: 1, max: 60 * 16 }), (sixteenths) => {
         const mm = (sixteenths / 16) * IN;
         const read = readCell(formatLength(mm, 'in'), 'in');
+        const bare = readCell(showCell(mm, 'in'), 'in');
+        expect('mm' in bare && bare.mm).toBeCloseTo(mm, 9);
         expect('mm' in read && read.mm).toBeCloseTo(mm, 9);
       }),
     );

@@ -7,8 +7,8 @@
  */
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { FIT_GIRTH_TOLERANCE, chartFromPattern, demoPattern, planFit } from '../../geometry/index.ts';
-import { DEMO_PASSWORD, DEMO_PATTERN_NAME } from '../../server/seed/demo.ts';
+import { FIT_GIRTH_TOLERANCE, chartFromPattern, demoPattern, formatLength, planFit } from '../../geometry/index.ts';
+import { DEMO_PASSWORD, DEMO_PATTERN_NAME, demoPrintedSizeChart } from '../../server/seed/demo.ts';
 import { useBrowserSession } from '../support/browser.ts';
 
 const session = useBrowserSession();
@@ -135,6 +135,7 @@ describe('planning a make\'s fit', () => {
     const numbers = page.getByRole('table', { name: 'Fit chart numbers' });
     expect(Number(await numbers.getByRole('row', { name: 'Waist' }).locator('td').first().getAttribute('data-mm'))).toBeCloseTo(32.5 * IN, 1);
     await page.screenshot({ path: `${shots}/fit-plan-chart.png`, fullPage: true });
+    await page.locator('figure').filter({ has: chart }).screenshot({ path: `${shots}/fit-plan-chart-figure.png` });
 
     // 4. Accepting the plan puts its alterations in the list and saves a revision.
     await page.getByRole('button', { name: 'Use these alterations' }).click();
@@ -228,7 +229,15 @@ describe('the pattern\'s size table', () => {
     expect(await section.getByRole('status').filter({ hasText: '1 cell differs' }).count()).toBe(1);
     const fromPieces = section.getByRole('table', { name: 'Finished measurements from the pieces' });
     expect(Number(await fromPieces.getByRole('row', { name: `Size ${a!.size}` }).locator('td').nth(1).locator('[data-mm]').getAttribute('data-mm'))).toBeCloseTo(a!.garment.waist!, 1);
-    await page.screenshot({ path: `${shots}/size-table.png`, fullPage: true });
+    await section.screenshot({ path: `${shots}/size-table.png` });
+
+    // The body chart behind the switch: ISO 8559-1 names as columns, the seed's numbers in inches.
+    await section.getByRole('radio', { name: 'Body chart' }).click();
+    const body = section.getByRole('table', { name: 'Printed body chart' });
+    await body.getByRole('columnheader', { name: 'Waist girth' }).waitFor();
+    const bodyWaist = await body.getByRole('textbox', { name: `Size ${a!.size} waist girth` }).inputValue();
+    expect(`${bodyWaist} in`).toBe(formatLength(demoPrintedSizeChart().sizes.find((x) => x.size === a!.size)!.body!.waistGirth!, 'in'));
+    await section.getByRole('radio', { name: 'Finished garment' }).click();
 
     // Kept on the server: the hip of size a in mm.
     const charts = await api<{ printed: { sizes: { size: string; garment: Record<string, number> }[] } }>(page, `/api/patterns/${pattern.id}/size-chart`);

@@ -39,7 +39,7 @@ const measuredHelper = createColumnHelper<typeof features, MeasuredRow>();
 
 const inputClasses = (invalid: boolean) =>
   cx(
-    'w-full min-w-[5.5rem] rounded border bg-calico-50 px-1.5 py-1 text-right tabular-nums text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
+    'w-full min-w-[4.75rem] rounded border bg-calico-50 px-1.5 py-1 text-right tabular-nums text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
     invalid ? 'border-madder-700' : 'border-calico-400',
   );
 
@@ -88,7 +88,7 @@ function SizeInput({ label, value, onCommit }: { label: string; value: string; o
     <input
       aria-label={label}
       maxLength={40}
-      className={cx(inputClasses(false), 'min-w-12 text-left font-semibold')}
+      className="w-16 rounded border border-calico-400 bg-calico-50 px-1.5 py-1 font-semibold text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400"
       value={draft ?? value}
       onChange={(e) => setDraft(e.target.value)}
       onBlur={() => {
@@ -187,7 +187,11 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
       ...columns.map((column: ChartColumn) =>
         helper.accessor((row) => (kind === 'garment' ? row.garment : row.body)[column.key], {
           id: column.key,
-          header: column.label,
+          header: () => (
+            <>
+              {column.label} <span className="font-normal text-ink-500">{units}</span>
+            </>
+          ),
           cell: (info) => {
             const row = info.row.original;
             const value = info.getValue();
@@ -235,7 +239,11 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
       ...GARMENT_COLUMNS.filter((c) => measured?.sizes.some((s) => s.garment[c.key] !== undefined)).map((column) =>
         measuredHelper.accessor((row) => row.garment[column.key], {
           id: column.key,
-          header: column.label,
+          header: () => (
+            <>
+              {column.label} <span className="font-normal text-ink-500">{units}</span>
+            </>
+          ),
           cell: (info) => (
             <span className="block whitespace-nowrap text-right tabular-nums" data-mm={info.getValue()?.toFixed(2)}>
               {showCell(info.getValue(), units) || '—'}
@@ -299,7 +307,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
                   {table.getHeaderGroups().map((group) => (
                     <tr key={group.id}>
                       {group.headers.map((header) => (
-                        <th key={header.id} scope="col" className="border-b border-calico-400 px-1.5 py-1 text-right text-xs font-semibold text-ink-700 first:text-left">
+                        <th key={header.id} scope="col" className="whitespace-nowrap border-b border-calico-400 px-1.5 py-1 text-right text-xs font-semibold text-ink-700 first:text-left">
                           {header.isPlaceholder ? null : <table.FlexRender header={header} />}
                         </th>
                       ))}
@@ -460,7 +468,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
                   {measuredTable.getHeaderGroups().map((group) => (
                     <tr key={group.id}>
                       {group.headers.map((header) => (
-                        <th key={header.id} scope="col" className="border-b border-calico-400 px-1.5 py-1 text-right text-xs font-semibold text-ink-700 first:text-left">
+                        <th key={header.id} scope="col" className="whitespace-nowrap border-b border-calico-400 px-1.5 py-1 text-right text-xs font-semibold text-ink-700 first:text-left">
                           {header.isPlaceholder ? null : <measuredTable.FlexRender header={header} />}
                         </th>
                       ))}

@@ -343,8 +343,8 @@ export function unmatchedSizes(printed: ChartLike | SizeChartDraft, measured: Ch
   return printed.sizes.map((s) => s.size.trim()).filter((s) => s !== '' && !have.has(s));
 }
 
-/** A cell's value as shown: in the person's unit, or empty. */
-export const showCell = (mm: number | undefined, unit: LengthUnit): string => (mm === undefined ? '' : formatLength(mm, unit));
+/** A cell's value as shown: the number in the person's unit without the unit's name (the heading says it), or empty. */
+export const showCell = (mm: number | undefined, unit: LengthUnit): string => (mm === undefined ? '' : formatLength(mm, unit).replace(/ (in|cm)$/, ''));
 
 /** Whether any piece of a pattern (plain JSON as the server sends it) is drawn with its seam allowance. */
 export function piecesIncludeSeamAllowance(pattern: unknown): boolean {

@@ -10,7 +10,7 @@ const garmentSideSchema = z.object({ label: z.string(), measures: measuresSchema
 const planSchema = z.object({
   levels: z.array(
     z
-      .object({ level: z.string(), body: z.number(), comfort: z.number().optional(), target: z.number(), ease: z.number().optional(), size: z.string(), garmentAtSize: z.number(), change: z.number().optional(), reason: z.string(), confidence: z.string() })
+      .object({ level: z.string(), body: z.number(), comfort: z.number().optional(), target: z.number(), ease: z.number().optional(), size: z.string(), bodyChartSize: z.string().optional(), garmentAtSize: z.number(), change: z.number().optional(), reason: z.string(), confidence: z.string() })
       .passthrough(),
   ),
   // The engine checks each operation when the list is replayed and saved.

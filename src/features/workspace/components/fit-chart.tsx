@@ -48,6 +48,16 @@ function LevelTick(props: { x?: number; y?: number; payload?: { value?: string; 
   );
 }
 
+/** A garment girth in the table, with its verdict under it (red when off the band). */
+function Judged({ verdict, text }: { verdict: GirthVerdict; text: string }) {
+  return (
+    <>
+      <span className="whitespace-nowrap">{text}</span>
+      <span className={verdict === 'fits' ? 'block text-[10px] text-ink-500' : 'block text-[10px] font-semibold text-madder-700'}>{verdictText[verdict]}</span>
+    </>
+  );
+}
+
 function Swatch({ mark }: { mark: Mark | 'band' }) {
   return (
     <svg viewBox="0 0 20 14" className="h-3.5 w-5 shrink-0" aria-hidden>
@@ -69,6 +79,8 @@ function Swatch({ mark }: { mark: Mark | 'band' }) {
 export function FitChart({ data, unit }: { data: FitChartData; unit: LengthUnit }) {
   const id = useId();
   const f = (mm: number) => formatLength(mm, unit);
+  /** In the table the heading names the unit. */
+  const n = (mm: number) => f(mm).replace(/ (in|cm)$/, '');
   const hasTarget = data.rows.some((r) => r.targetBelowComfort);
   const hasBefore = data.rows.some((r) => r.before !== undefined);
   const hasAfter = data.rows.some((r) => r.after !== undefined);
@@ -135,10 +147,11 @@ export function FitChart({ data, unit }: { data: FitChartData; unit: LengthUnit 
       <details className="text-xs">
         <summary className="cursor-pointer font-semibold text-denim-700">The chart as a table</summary>
         <table aria-label="Fit chart numbers" className="mt-1 w-full text-right tabular-nums">
+          <caption className="sr-only">Girths in {unit === 'in' ? 'inches' : 'centimetres'}</caption>
           <thead>
             <tr className="text-ink-500">
               <th scope="col" className="text-left font-normal">
-                Level
+                Level ({unit})
               </th>
               <th scope="col" className="font-normal">
                 Body
@@ -165,11 +178,11 @@ export function FitChart({ data, unit }: { data: FitChartData; unit: LengthUnit 
                 <th scope="row" className="text-left font-semibold">
                   {r.label} <span className="font-normal text-ink-500">({r.size})</span>
                 </th>
-                <td data-mm={r.body.toFixed(2)}>{f(r.body)}</td>
-                <td data-mm={r.comfort.toFixed(2)}>{f(r.comfort)}</td>
-                {hasTarget && <td data-mm={r.target.toFixed(2)}>{f(r.target)}</td>}
-                <td data-mm={r.before?.toFixed(2)}>{r.before !== undefined ? `${f(r.before)} (${verdictText[r.beforeVerdict!]})` : '—'}</td>
-                <td data-mm={r.after?.toFixed(2)}>{r.after !== undefined ? `${f(r.after)} (${verdictText[r.afterVerdict!]})` : '—'}</td>
+                <td data-mm={r.body.toFixed(2)}>{n(r.body)}</td>
+                <td data-mm={r.comfort.toFixed(2)}>{n(r.comfort)}</td>
+                {hasTarget && <td data-mm={r.target.toFixed(2)}>{n(r.target)}</td>}
+                <td data-mm={r.before?.toFixed(2)}>{r.before !== undefined ? <Judged verdict={r.beforeVerdict!} text={n(r.before)} /> : '—'}</td>
+                <td data-mm={r.after?.toFixed(2)}>{r.after !== undefined ? <Judged verdict={r.afterVerdict!} text={n(r.after)} /> : '—'}</td>
               </tr>
             ))}
           </tbody>

@@ -72,6 +72,7 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
   const result = plan.data;
   const chart = useMemo(() => (result ? fitChartData(result.plan.levels, result.plan.garment, unit) : null), [result, unit]);
   const previousName = result?.previous?.makeName;
+  const hasBodyChart = result?.plan.levels.some((l) => l.bodyChartSize !== undefined) ?? false;
 
   return (
     <section aria-labelledby="plan-heading" className="flex flex-col gap-3">
@@ -157,6 +158,11 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
                 <th className="text-right font-normal">Body</th>
                 <th className="text-right font-normal">Aim</th>
                 <th className="text-right font-normal">Size</th>
+                {hasBodyChart && (
+                  <th className="text-right font-normal" title="The size the pattern's printed body chart gives for this body">
+                    Chart
+                  </th>
+                )}
               </tr>
             </thead>
             <tbody>
@@ -166,10 +172,19 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
                   <td className="text-right tabular-nums" data-mm={l.body.toFixed(2)}>{formatLength(l.body, unit)}</td>
                   <td className="text-right tabular-nums" data-mm={l.target.toFixed(2)}>{formatLength(l.target, unit)}</td>
                   <td className="text-right font-semibold tabular-nums">{l.size}</td>
+                  {hasBodyChart && <td className="text-right tabular-nums text-ink-500">{l.bodyChartSize ?? '—'}</td>}
                 </tr>
               ))}
             </tbody>
           </table>
+          <details className="text-xs text-ink-700">
+            <summary className="cursor-pointer font-semibold text-denim-700">Why these sizes</summary>
+            <ul aria-label="Reasons per level" className="mt-1 flex flex-col gap-1">
+              {result.plan.levels.map((l) => (
+                <li key={l.level}>{l.reason}</li>
+              ))}
+            </ul>
+          </details>
           {chart && <FitChart data={chart} unit={unit} />}
           <ol aria-label="Suggested alterations" className="flex flex-col gap-1 text-sm">
             {result.plan.steps.map((s, i) => {
