@@ -9,9 +9,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { BODY_MEASUREMENT_NAMES, bodyProfileSchema } from '../../geometry/fit/body.ts';
-import { MEASUREMENT_NAMES as MAKES_NAMES } from '../../src/features/makes/measurement-names.ts';
 import { measurementHelp } from '../../src/features/profiles/measurement-help.ts';
-import { MEASUREMENT_NAMES } from '../../src/features/profiles/measurement-names.ts';
+import { MEASUREMENT_NAMES } from '../../src/types/measurement-names.ts';
 import {
   changeText,
   draftFrom,
@@ -33,9 +32,8 @@ const TODAY = '2026-03-10';
 const draft = (over: Partial<MeasurementsDraft> = {}): MeasurementsDraft => ({ measurements: {}, girthRows: [], takenOn: TODAY, note: '', ...over });
 
 describe('measurement names', () => {
-  it('are geometry\'s ISO 8559-1 keys and the makes feature\'s copy, each with a label and how-to-measure help', () => {
+  it('are geometry\'s ISO 8559-1 keys, each with a label and how-to-measure help', () => {
     expect([...MEASUREMENT_NAMES]).toEqual([...BODY_MEASUREMENT_NAMES]);
-    expect([...MEASUREMENT_NAMES]).toEqual([...MAKES_NAMES]);
     for (const name of MEASUREMENT_NAMES) {
       expect(measurementHelp[name].label.length).toBeGreaterThan(0);
       expect(measurementHelp[name].howTo.length).toBeGreaterThan(40);

@@ -17,7 +17,7 @@ import {
   stretchPercent,
 } from '../../geometry/index.ts';
 import { MEASUREMENT_NAMES } from '../../server/modules/profiles/profiles.schemas.ts';
-import { MEASUREMENT_NAMES as CLIENT_MEASUREMENT_NAMES } from '../../src/features/makes/measurement-names.ts';
+import { MEASUREMENT_NAMES as CLIENT_MEASUREMENT_NAMES } from '../../src/types/measurement-names.ts';
 import { expectNear } from './helpers.ts';
 
 describe('units', () => {

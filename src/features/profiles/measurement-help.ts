@@ -1,4 +1,4 @@
-import type { MeasurementName } from './measurement-names';
+import type { MeasurementName } from '../../types/measurement-names';
 
 /**
  * How each body measurement is named on screen and how to take it, in our own words. The

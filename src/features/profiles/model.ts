@@ -5,7 +5,7 @@
  * No React here, so tests/client/profiles-model.test.ts can check it directly.
  */
 import { formatLength, LengthParseError, parseLength, type LengthUnit } from '../../../geometry/units';
-import { MEASUREMENT_NAMES, type MeasurementName, type Measurements } from './measurement-names';
+import { MEASUREMENT_NAMES, type MeasurementName, type Measurements } from '../../types/measurement-names';
 
 export type FieldErrors = Record<string, string>;
 

@@ -20,7 +20,7 @@ import {
   type ShrinkageDraft,
   type StretchDraft,
 } from '../model';
-import { FieldError, LengthInput } from './length-input';
+import { FieldError, LengthInput } from '../../../components/ui/length-input';
 
 const controlClasses = (invalid: boolean) =>
   cx(

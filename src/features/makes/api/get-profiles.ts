@@ -3,8 +3,8 @@ import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { profileKeys } from '../query-keys';
 
-export { MEASUREMENT_NAMES, type MeasurementName } from '../measurement-names';
-import type { MeasurementName } from '../measurement-names';
+export { MEASUREMENT_NAMES, type MeasurementName } from '../../../types/measurement-names';
+import type { MeasurementName } from '../../../types/measurement-names';
 export type Measurements = Partial<Record<MeasurementName, number>>;
 
 export const profileSchema = z.object({

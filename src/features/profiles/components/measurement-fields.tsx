@@ -3,9 +3,9 @@ import { Button } from '../../../components/ui/button';
 import type { LengthUnit } from '../../../../geometry/units';
 import { cx } from '../../../lib/cx';
 import { girthAtHeightHowTo, girthsAtHeightsWhy, measurementHelp, measuringCaution } from '../measurement-help';
-import { MEASUREMENT_NAMES, type MeasurementName } from '../measurement-names';
+import { MEASUREMENT_NAMES, type MeasurementName } from '../../../types/measurement-names';
 import { MAX_NOTE_LENGTH, todayIso, type FieldErrors, type GirthRowDraft, type MeasurementsDraft } from '../model';
-import { FieldError, LengthInput } from './length-input';
+import { FieldError, LengthInput } from '../../../components/ui/length-input';
 
 const controlClasses = (invalid: boolean) =>
   cx(

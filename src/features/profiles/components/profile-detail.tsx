@@ -9,7 +9,7 @@ import { useDeleteProfile } from '../api/delete-profile';
 import { useProfile } from '../api/get-profile';
 import type { ProfileDetail as Profile } from '../api/schemas';
 import { useUpdateProfile } from '../api/update-profile';
-import type { Measurements } from '../measurement-names';
+import type { Measurements } from '../../../types/measurement-names';
 import { draftFrom, formatTakenOn, type DraftOrigin } from '../model';
 import { HistoryTable } from './history-table';
 import { MeasurementsForm } from './measurements-form';

@@ -1,6 +1,6 @@
 import { useId } from 'react';
-import { formatLength, parseLength, type LengthUnit } from '../../../../geometry/units';
-import { cx } from '../../../lib/cx';
+import { formatLength, parseLength, type LengthUnit } from '../../../geometry/units';
+import { cx } from '../../lib/cx';
 
 /** What a typed length reads as in the person's units, or null when it is blank or not a length. */
 function readBack(text: string, unit: LengthUnit): string | null {
@@ -16,8 +16,8 @@ function readBack(text: string, unit: LengthUnit): string | null {
  * A length typed in the person's units that may be left blank ("not measured"). It reads like
  * the shared LengthField (`2 1/2`, `2.5in`, `6.35 cm`, `63.5mm`, geometry/units.ts) and shows
  * what it read, but keeps the text as typed until the form is sent, so a blank stays blank and
- * the server's message for the field can be shown beside it. (The same component is in the
- * fabrics feature: features do not import each other.)
+ * the server's message for the field can be shown beside it. (LengthField is the one for
+ * lengths that always have a value.)
  */
 export function LengthInput({
   label,

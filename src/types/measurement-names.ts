@@ -1,8 +1,8 @@
 /**
  * Body measurements in millimetres, by their ISO 8559-1 names: the server's profile keys
- * (geometry/fit/body.ts BODY_MEASUREMENT_NAMES). A copy, because features do not import each
- * other and a light page does not load the engine; tests/client/profiles-model.test.ts checks it
- * against geometry's list and the makes feature's copy.
+ * (geometry/fit/body.ts BODY_MEASUREMENT_NAMES). A copy shared by the makes and profiles
+ * features, so light pages do not load the engine; tests/geometry/fit-body.test.ts checks it
+ * against geometry's list.
  */
 export const MEASUREMENT_NAMES = [
   'waistGirth',
