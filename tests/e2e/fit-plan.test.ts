@@ -162,7 +162,7 @@ describe('planning a make\'s fit', () => {
     expect(saved.fitNote!.levels.waist!.verdict).toBe('tight');
     expect(saved.fitNote!.levels.waist!.amount).toBeCloseTo(IN / 2, 6);
     expect(saved.fitNote!.levels.rise!.amount).toBeCloseTo(IN, 6);
-    await page.screenshot({ path: `${shots}/fit-note.png`, fullPage: true });
+    await page.getByRole('region', { name: 'How did it fit?' }).screenshot({ path: `${shots}/fit-note.png` });
 
     // 6. Sew it again: the new make's plan reads the note — ½ in more at the waist, a longer rise.
     await page.goto(`${session.url}/makes`);
@@ -185,6 +185,30 @@ describe('planning a make\'s fit', () => {
     const fromNote = page.getByRole('list', { name: 'Suggested alterations' }).getByRole('listitem').filter({ hasText: 'From the last make’s fit note' });
     expect(await fromNote.count()).toBeGreaterThan(0);
     await page.screenshot({ path: `${shots}/fit-plan-again.png`, fullPage: true });
+
+    // 7. The make's fabric: a kept cloth with 20 % crosswise stretch, chosen in the plan panel.
+    const csrf = ((await (await page.request.get(`${session.url}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
+    const created = await page.request.post(`${session.url}/api/fabrics`, { headers: { 'x-csrf-token': csrf }, data: { name: 'Grey stretch twill', properties: { stretchAcross: 20 } } });
+    expect(created.status()).toBe(201);
+    await page.reload();
+    await page.getByRole('button', { name: 'Plan the fit' }).click();
+    await page.getByLabel('Fabric', { exact: true }).selectOption({ label: 'Grey stretch twill' });
+    await expect.poll(() => page.getByLabel('Fabric', { exact: true }).isEnabled()).toBe(true);
+    const again2 = (await api<{ makes: { name: string; fabricId: string | null }[] }>(page, '/api/makes')).makes.find((m) => m.name === 'Grey twill trousers (again)')!;
+    expect(again2.fabricId).not.toBeNull();
+    await page.getByRole('button', { name: 'Make the plan' }).click();
+    await page.getByRole('table', { name: 'Size per level' }).getByRole('row', { name: 'hip' }).waitFor({ timeout: 30_000 });
+    // The aim sits below body + ease: T = C × (1 − r), r = k·s / (1 + k·s) with k = ½ of s = 20 %
+    // (trade reference §4.3 as geometry/fit/plan.ts cites it; common practice, no source).
+    await chart.locator('svg [data-mark="target"]').first().waitFor();
+    expect(await chart.locator('svg [data-mark="target"]').count()).toBe(5);
+    await page.getByText('The chart as a table').click();
+    const hipRow = page.getByRole('table', { name: 'Fit chart numbers' }).getByRole('row', { name: 'Hip' }).locator('td');
+    const comfort = Number(await hipRow.nth(1).getAttribute('data-mm'));
+    const aim = Number(await hipRow.nth(2).getAttribute('data-mm'));
+    expect(aim / comfort).toBeCloseTo(1 - 0.1 / 1.1, 4);
+    expect(await page.getByRole('list', { name: 'Legend' }).innerText()).toContain('Aim with the cloth’s stretch');
+    await page.locator('figure').filter({ has: chart }).screenshot({ path: `${shots}/fit-plan-chart-stretch.png` });
     expect(errors).toEqual([]);
   }, 180_000);
 });

@@ -146,7 +146,7 @@ export function FitChart({ data, unit }: { data: FitChartData; unit: LengthUnit 
       </ul>
       <details className="text-xs">
         <summary className="cursor-pointer font-semibold text-denim-700">The chart as a table</summary>
-        <table aria-label="Fit chart numbers" className="mt-1 w-full text-right tabular-nums">
+        <table aria-label="Fit chart numbers" className="mt-1 w-full text-right tabular-nums [&_td]:whitespace-nowrap [&_td]:pl-1.5 [&_td]:align-top [&_th]:pl-1.5 [&_th:first-child]:pl-0">
           <caption className="sr-only">Girths in {unit === 'in' ? 'inches' : 'centimetres'}</caption>
           <thead>
             <tr className="text-ink-500">

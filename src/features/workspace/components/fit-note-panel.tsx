@@ -58,7 +58,7 @@ function NoteForm({ makeId, unit, initial, hasNote }: { makeId: string; unit: Le
             const name = LEVEL_LABELS[level];
             return (
               <tr key={level} className="align-top">
-                <th scope="row" className="py-1 pr-2 text-left font-semibold text-ink-900">
+                <th scope="row" className="py-1 pr-2 pt-2.5 text-left font-semibold text-ink-900">
                   {name}
                 </th>
                 <td className="py-1 pr-2">
@@ -77,7 +77,6 @@ function NoteForm({ makeId, unit, initial, hasNote }: { makeId: string; unit: Le
                     aria-invalid={error ? true : undefined}
                     aria-describedby={error ? `${id}-${level}-error` : undefined}
                     disabled={value.verdict === 'right'}
-                    placeholder={value.verdict === 'right' ? '' : unit === 'in' ? 'e.g. 1/2' : 'e.g. 1.5'}
                     className={cx(inputClasses(Boolean(error)), 'w-24')}
                     value={value.verdict === 'right' ? '' : value.amount}
                     onChange={(e) => setLevel(level, { amount: e.target.value })}
