@@ -197,13 +197,19 @@ export interface PlannedLevel {
    * own ease assumed), when the table has a body chart there: to compare with `size`.
    */
   readonly bodyChartSize?: string;
+  /** Ease (mm, + more) the earlier make's fit note added here; absent when it added none. */
+  readonly fromNote?: number;
 }
 
 export interface PlanStep {
   readonly op: AlterationOp;
   readonly reason: string;
   readonly confidence: Confidence;
+  /** True when the earlier make's fit note changed this step. */
+  readonly fromNote?: true;
 }
+
+const noteFlag = (changed: boolean): { fromNote?: true } => (changed ? { fromNote: true } : {});
 
 export interface FitPlan {
   readonly units: 'mm';
@@ -467,6 +473,7 @@ export function planFit(input: PlanInput): FitPlan {
       reason,
       confidence,
       ...(bodyChartSize !== undefined ? { bodyChartSize } : {}),
+      ...(fromNote !== 0 ? { fromNote } : {}),
     });
 
     if (beyond > 0)
@@ -486,7 +493,7 @@ export function planFit(input: PlanInput): FitPlan {
   if (blendLevels.length > 0 && scale.sizes.length > 1) {
     const words = blendLevels.map((l) => `${l.size} at the ${l.level}`).join(', ');
     const conf: Confidence = blendLevels.some((l) => l.confidence === 'low') ? 'low' : blendLevels.some((l) => l.confidence === 'medium') ? 'medium' : 'high';
-    steps.push({ op: { op: 'blend', levels: blendLevels.map((l) => ({ level: l.level, size: l.size })) }, reason: `Blend sizes: ${words}.`, confidence: conf });
+    steps.push({ op: { op: 'blend', levels: blendLevels.map((l) => ({ level: l.level, size: l.size })) }, reason: `Blend sizes: ${words}.`, confidence: conf, ...noteFlag(blendLevels.some((l) => l.fromNote !== undefined)) });
   }
 
   // lengths, read at the size chosen at the hip (rise) and at the thigh (inseam)
@@ -537,6 +544,7 @@ export function planFit(input: PlanInput): FitPlan {
           op: { op: 'rise', line: riseLine, amount },
           reason: `Rise: body rise ${L(profile.bodyRise)} + ${L(riseEase)} ease${opts.waistOffset !== 0 ? ` ${opts.waistOffset > 0 ? '+' : '−'} ${L(Math.abs(opts.waistOffset))} for the waistband's height` : ''}${riseNote !== 0 ? ` ${riseNote > 0 ? '+' : '−'} ${L(Math.abs(riseNote))} for the note on ${noteFrom}` : ''} = ${L(want)}; the pattern's crotch depth ${depth.where} is ${L(depth.value)}: ${amount > 0 ? 'raise' : 'lower'} by ${L(Math.abs(amount))}.`,
           confidence: 'medium',
+          ...noteFlag(riseNote !== 0),
         });
     }
   }
@@ -558,6 +566,7 @@ export function planFit(input: PlanInput): FitPlan {
             op: { op: 'lengthen', line, amount: part },
             reason: `Leg length: inside leg ${L(profile.insideLegLength!)}${opts.inseamOffset !== 0 ? ` ${opts.inseamOffset > 0 ? '+' : '−'} ${L(Math.abs(opts.inseamOffset))}` : ''}${lengthNote !== 0 ? ` ${lengthNote > 0 ? '+' : '−'} ${L(Math.abs(lengthNote))} for the note on ${noteFrom}` : ''} against the pattern's inseam of ${L(inseam.value)} ${inseam.where}: ${amount > 0 ? 'lengthen' : 'shorten'} by ${L(Math.abs(amount))}${n > 1 ? `, ${L(Math.abs(part))} of it at "${line}"` : ''}.`,
             confidence: 'medium',
+            ...noteFlag(lengthNote !== 0),
           });
         });
       }
@@ -580,6 +589,7 @@ export function planFit(input: PlanInput): FitPlan {
       op: { op: 'girth', edge: 'side-seam', level: l.level, amount },
       reason: `${l.level[0]!.toUpperCase()}${l.level.slice(1)}: ${l.change > 0 ? 'let out' : 'take in'} ${L(Math.abs(l.change))} round the ${TRUNK.includes(l.level) ? 'garment' : 'leg'}, ${L(Math.abs(amount))} at each of ${edges} side-seam edges.`,
       confidence: l.confidence === 'high' ? 'medium' : l.confidence,
+      ...noteFlag(l.fromNote !== undefined),
     });
   }
 

@@ -140,10 +140,10 @@ describe('the fit note form', () => {
     expect(describeFitNote({ levels: { rise: { verdict: 'short', amount: 10 } }, nextTime: '' }, 'cm')).toEqual(['Rise: too short by 1 cm']);
   });
 
-  it('a plan step counts as coming from the last note when flagged, or when its reason names the note or the make', () => {
-    expect(fromPreviousNote({ reason: 'Hip too loose last time', fromFitNote: true }, 'Jeans')).toBe(true);
-    expect(fromPreviousNote({ reason: 'The fit note of “Everyday jeans” says the rise was too short by 1 in.' }, undefined)).toBe(true);
-    expect(fromPreviousNote({ reason: 'Everyday jeans was too tight at the waist' }, 'Everyday jeans')).toBe(true);
-    expect(fromPreviousNote({ reason: 'Size 4.3 at the hip: the body 1000 mm + ease 50.8 mm' }, 'Everyday jeans')).toBe(false);
+  it('a plan step or level counts as coming from the last note when the planner flags it', () => {
+    // the planner flags what the note changed (geometry/fit/plan.ts PlanStep.fromNote, PlannedLevel.fromNote)
+    expect(fromPreviousNote({ fromNote: true })).toBe(true);
+    expect(fromPreviousNote({ fromNote: 12.7 })).toBe(true);
+    expect(fromPreviousNote({})).toBe(false);
   });
 });

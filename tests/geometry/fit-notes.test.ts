@@ -41,6 +41,9 @@ describe('fit notes', () => {
     // the size grows by the extra girth over the grade (20 mm per size number), to 0.1 of a size
     expectNear(sizeNumber(h1.size)! - sizeNumber(h0.size)!, IN / 2 / 20, 0.1, 'size change at the hip');
     expect(h1.reason).toMatch(/First jeans/);
+    expect(h1.fromNote).toBeCloseTo(IN / 2, 9);
+    expect(h0.fromNote).toBeUndefined();
+    expect(again.steps.find((st) => st.op.op === 'blend')?.fromNote).toBe(true);
     expect(again.fromPrevious.join('\n')).toMatch(/Hip: “First jeans” was 1.3 cm too tight/);
     // the other levels are untouched
     for (const l of ['waist', 'thigh', 'calf'] as const) expect(again.levels.find((x) => x.level === l)!.ease).toBe(plain.levels.find((x) => x.level === l)!.ease);
@@ -58,6 +61,9 @@ describe('fit notes', () => {
     expectNear(sum(again, 'rise') - sum(plain, 'rise'), 15, 0.11, 'rise change'); // amounts are rounded to 0.1 mm
     expectNear(sum(again, 'lengthen') - sum(plain, 'lengthen'), -20, 0.21, 'length change');
     expect(again.fromPrevious).toHaveLength(2);
+    // the steps the note changed say so; the blend (no girth note) does not
+    expect(again.steps.filter((st) => st.fromNote).map((st) => st.op.op)).toEqual(['rise', 'lengthen', 'lengthen']);
+    expect(plain.steps.some((st) => st.fromNote)).toBe(false);
   });
 
   it('an unsized verdict and the "next time" words reach the cautions', () => {

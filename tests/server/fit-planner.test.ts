@@ -180,6 +180,13 @@ describe("a make's fabric, fit note and plan", () => {
     expect(((await ada.get(`/api/makes/${make.id}`)).body.make as { fitNote: unknown }).fitNote).toMatchObject(note);
     expect((await ada.send('delete', `/api/makes/${make.id}/fit-note`)).status).toBe(204);
     expect(((await ada.get(`/api/makes/${make.id}`)).body.make as { fitNote: unknown }).fitNote).toBeNull();
+    // sewn again before a note was written: the plan names the make, with no note yet
+    const again = (await ada.send('post', `/api/makes/${make.id}/duplicate`, {})).body.make as { id: string };
+    await ada.send('patch', `/api/makes/${again.id}`, { profileId: ((await ada.get('/api/profiles')).body.profiles as { id: string }[])[0]!.id });
+    const plan = await ada.send('post', `/api/makes/${again.id}/plan`, { chart: 'measured' });
+    expect(plan.status).toBe(200);
+    expect(plan.body.previous).toEqual({ makeId: make.id, makeName: 'Note test', fitNote: null });
+    expect(plan.body.plan.fromPrevious).toEqual([]);
   });
 
   it('when a make names a fabric, then it must be the owner\'s', async () => {

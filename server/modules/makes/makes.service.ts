@@ -230,7 +230,7 @@ export class MakesService {
     actor: Actor & { units?: 'in' | 'cm' },
     id: string,
     input: { fabric?: unknown; fabricId?: string; options: Record<string, unknown>; chart?: 'printed' | 'measured' },
-  ): Promise<{ plan: FitPlan; previous: { makeId: string; makeName: string; fitNote: NonNullable<MakeEntity['fitNote']> } | null }> {
+  ): Promise<{ plan: FitPlan; previous: { makeId: string; makeName: string; fitNote: MakeEntity['fitNote'] } | null }> {
     const make = await this.load(actor, id);
     let fabric = input.fabric;
     const fabricId = input.fabric === undefined ? (input.fabricId ?? make.fabricId ?? undefined) : undefined;
@@ -242,9 +242,9 @@ export class MakesService {
     if (input.chart === 'printed' && !entity.sizeChart)
       throw new AppError('invalid_input', 'This pattern has no printed size table: type it in on the pattern, or plan from the pieces.', 400, { chart: 'No printed size table.' });
     const chart = input.chart !== 'measured' && entity.sizeChart ? this.printedWithGaps(entity.sizeChart, pattern) : undefined;
-    // the make this one repeats, when it is still the same person's and has a note
+    // the make this one repeats, when it is still the same person's (its note may be null: not written yet)
     const source = make.sourceMakeId ? await this.repo.findOneBy({ id: make.sourceMakeId, ownerId: actor.id }) : null;
-    const previous = source?.fitNote ? { makeId: source.id, makeName: source.name, fitNote: source.fitNote } : null;
+    const previous = source ? { makeId: source.id, makeName: source.name, fitNote: source.fitNote } : null;
     const revision = await this.revisionEntity(make.id, make.latestRevision);
     const current: AlterationOp[] = revision.alterations.filter((e) => e.enabled).map((e) => e.op);
     try {
@@ -256,7 +256,7 @@ export class MakesService {
         current,
         ...(chart ? { chart } : {}),
         ...(fabric !== undefined ? { fabric } : {}),
-        ...(previous ? { previous: { note: { levels: previous.fitNote.levels, nextTime: previous.fitNote.nextTime }, makeName: previous.makeName } } : {}),
+        ...(previous?.fitNote ? { previous: { note: { levels: previous.fitNote.levels, nextTime: previous.fitNote.nextTime }, makeName: previous.makeName } } : {}),
       });
       return { plan, previous };
     } catch (e) {

@@ -10,13 +10,13 @@ const garmentSideSchema = z.object({ label: z.string(), measures: measuresSchema
 const planSchema = z.object({
   levels: z.array(
     z
-      .object({ level: z.string(), body: z.number(), comfort: z.number().optional(), target: z.number(), ease: z.number().optional(), size: z.string(), bodyChartSize: z.string().optional(), garmentAtSize: z.number(), change: z.number().optional(), reason: z.string(), confidence: z.string() })
+      .object({ level: z.string(), body: z.number(), comfort: z.number().optional(), target: z.number(), ease: z.number().optional(), size: z.string(), bodyChartSize: z.string().optional(), garmentAtSize: z.number(), change: z.number().optional(), reason: z.string(), confidence: z.string(), fromNote: z.number().optional() })
       .passthrough(),
   ),
   // The engine checks each operation when the list is replayed and saved.
   steps: z.array(
     z
-      .object({ op: z.custom<AlterationOp>((v) => typeof v === 'object' && v !== null && typeof (v as { op?: unknown }).op === 'string'), reason: z.string(), confidence: z.string() })
+      .object({ op: z.custom<AlterationOp>((v) => typeof v === 'object' && v !== null && typeof (v as { op?: unknown }).op === 'string'), reason: z.string(), confidence: z.string(), fromNote: z.literal(true).optional() })
       .passthrough(),
   ),
   cautions: z.array(z.string()),

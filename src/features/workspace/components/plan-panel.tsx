@@ -71,7 +71,6 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
 
   const result = plan.data;
   const chart = useMemo(() => (result ? fitChartData(result.plan.levels, result.plan.garment, unit) : null), [result, unit]);
-  const previousName = result?.previous?.makeName;
   const hasBodyChart = result?.plan.levels.some((l) => l.bodyChartSize !== undefined) ?? false;
 
   return (
@@ -188,7 +187,7 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
           {chart && <FitChart data={chart} unit={unit} />}
           <ol aria-label="Suggested alterations" className="flex flex-col gap-1 text-sm">
             {result.plan.steps.map((s, i) => {
-              const fromNote = result.previous ? fromPreviousNote(s, previousName) : false;
+              const fromNote = fromPreviousNote(s);
               return (
                 <li key={i} className={fromNote ? 'rounded-md border border-denim-600 bg-denim-50 p-2' : 'rounded-md border border-calico-300 bg-calico-50 p-2'}>
                   <p className="font-semibold text-ink-900">{describeOp(s.op, unit)}</p>

@@ -110,13 +110,7 @@ export function describeFitNote(note: FitNote, unit: LengthUnit): string[] {
 /** Whether a note says anything at all. */
 export const noteIsEmpty = (note: FitNote): boolean => Object.keys(note.levels).length === 0 && note.nextTime.trim() === '';
 
-/**
- * Whether a plan step or level's reason came from the previous make's note. The contract gives
- * no flag for it: a `fromFitNote: true` on the step is used when present, else the reason naming
- * the note or the previous make.
- */
-export function fromPreviousNote(step: { readonly reason: string; readonly fromFitNote?: unknown; readonly source?: unknown }, previousMakeName: string | undefined): boolean {
-  if (step.fromFitNote === true || step.source === 'fit-note' || step.source === 'previous') return true;
-  const r = step.reason.toLowerCase();
-  return r.includes('fit note') || r.includes('note on') || r.includes('last make') || r.includes('previous make') || (previousMakeName !== undefined && previousMakeName.trim() !== '' && r.includes(previousMakeName.toLowerCase()));
+/** Whether the previous make's note changed a plan step or level (the planner flags it: `fromNote`). */
+export function fromPreviousNote(step: { readonly fromNote?: unknown }): boolean {
+  return step.fromNote !== undefined && step.fromNote !== false;
 }
