@@ -1,4 +1,4 @@
-import { useId, useMemo, useState } from 'react';
+import { Suspense, lazy, useId, useMemo, useState } from 'react';
 import { type AlterationEntry, formatLength, type LengthUnit } from '../../../../geometry/index.ts';
 import { Button } from '../../../components/ui/button';
 import { LengthField } from '../../../components/ui/length-field';
@@ -11,7 +11,9 @@ import { fitChartData } from '../model/fit-chart';
 import { describeFitNote, fromPreviousNote } from '../model/fit-note';
 import { type Intent, newEntryId } from '../model/intents';
 import { acceptPlan } from '../model/plan';
-import { FitChart } from './fit-chart';
+
+// recharts is loaded with the chart, when a plan is first shown, not with the workspace
+const FitChart = lazy(() => import('./fit-chart').then((m) => ({ default: m.FitChart })));
 
 const selectClasses = 'rounded-md border border-calico-400 bg-calico-50 px-2 py-1.5 font-normal';
 
@@ -184,7 +186,11 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
               ))}
             </ul>
           </details>
-          {chart && <FitChart data={chart} unit={unit} />}
+          {chart && (
+            <Suspense fallback={<p className="text-sm text-ink-700">Drawing the fit chart…</p>}>
+              <FitChart data={chart} unit={unit} />
+            </Suspense>
+          )}
           <ol aria-label="Suggested alterations" className="flex flex-col gap-1 text-sm">
             {result.plan.steps.map((s, i) => {
               const fromNote = fromPreviousNote(s);
