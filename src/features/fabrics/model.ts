@@ -7,7 +7,8 @@
  * The constants are copies of geometry's (a light page does not load the engine); the test
  * checks that they are equal.
  */
-import { formatLength, LengthParseError, parseLength, type LengthUnit } from '../../../geometry/units';
+import { formatLength, type LengthUnit } from '../../../geometry/units';
+import { MAX_LENGTH_MM, readLength } from '../../lib/read-length';
 
 /** 1 international avoirdupois ounce = 28.349 523 125 g exactly (1 lb = 0.453 592 37 kg, 16 oz). */
 export const GRAMS_PER_OUNCE = 28.349523125;
@@ -29,7 +30,7 @@ export const MAX_SHRINKAGE_PERCENT = 30;
 export const MAX_STRETCH_PERCENT = 300;
 export const MAX_GSM = 2000;
 export const MAX_OZ_PER_SQ_YD = 60;
-export const MAX_LENGTH_MM = 3000;
+export { MAX_LENGTH_MM };
 
 /** Stretch percent from a hand test: 100 × (stretched − relaxed) / relaxed (trade reference §4.2). */
 export function stretchPercent(relaxed: number, stretched: number): number {
@@ -165,24 +166,7 @@ export function readNumber(text: string): { value: number | undefined } | { erro
   return { value: Number(trimmed.replace('−', '-').replace(',', '.')) };
 }
 
-const capitalise = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
-
-/** A typed length in `unit`, in millimetres; `keepMm` keeps a value whose shown text was not changed. */
-export function readLength(text: string, unit: LengthUnit, keepMm?: number): { mm: number | undefined } | { error: string } {
-  const trimmed = text.trim();
-  if (trimmed === '') return { mm: undefined };
-  if (keepMm !== undefined && trimmed === formatLength(keepMm, unit)) return { mm: keepMm };
-  let mm: number;
-  try {
-    mm = parseLength(trimmed, unit);
-  } catch (error) {
-    if (error instanceof LengthParseError) return { error: capitalise(error.message) + '.' };
-    throw error;
-  }
-  if (mm <= 0) return { error: 'Give a length above 0.' };
-  if (mm > MAX_LENGTH_MM) return { error: `That is over ${formatLength(MAX_LENGTH_MM, unit)}: check the number and its unit.` };
-  return { mm };
-}
+export { readLength };
 
 /** What the form shows beside a test: the stretch it gives, when both lengths read. */
 export function stretchFromDraft(d: StretchDraft, unit: LengthUnit): number | undefined {
@@ -237,7 +221,7 @@ export function readFabricDraft(
     return undefined;
   };
   const lengthIn = (key: string, text: string, keep?: number): number | undefined => {
-    const r = readLength(text, unit, keep);
+    const r = readLength(text, unit, { keepMm: keep });
     if ('error' in r) errors[key] = r.error;
     else return r.mm;
     return undefined;

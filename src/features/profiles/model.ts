@@ -4,13 +4,14 @@
  * and the history of dated sets with the change from one set to the one before it.
  * No React here, so tests/client/profiles-model.test.ts can check it directly.
  */
-import { formatLength, LengthParseError, parseLength, type LengthUnit } from '../../../geometry/units';
+import { formatLength, type LengthUnit } from '../../../geometry/units';
+import { MAX_LENGTH_MM, readLength } from '../../lib/read-length';
 import { MEASUREMENT_NAMES, type MeasurementName, type Measurements } from '../../types/measurement-names';
 
 export type FieldErrors = Record<string, string>;
 
 /** The API keeps body measurements up to 3 m (geometry/fit/body.ts). */
-export const MAX_MEASUREMENT_MM = 3000;
+export const MAX_MEASUREMENT_MM = MAX_LENGTH_MM;
 /** Girths at heights are taken within 400 mm of the natural waist (geometry/fit/body.ts). */
 export const MAX_HEIGHT_OFFSET_MM = 400;
 /** The API keeps at most this many girths at heights per set. */
@@ -18,32 +19,7 @@ export const MAX_GIRTHS_AT_HEIGHTS = 40;
 /** A note on a dated set is at most this long (the API keeps up to 500 characters). */
 export const MAX_NOTE_LENGTH = 500;
 
-const capitalise = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
-
-/**
- * A typed length in `unit` read into millimetres: blank is "not given"; otherwise it must be
- * a length above 0 and at most `max` mm. `keepMm`: when the text is exactly how that value is
- * shown, the value itself is kept, so showing and saving again does not round it to 1/16 in.
- */
-export function readLength(
-  text: string,
-  unit: LengthUnit,
-  { max = MAX_MEASUREMENT_MM, keepMm }: { max?: number; keepMm?: number } = {},
-): { mm: number | undefined } | { error: string } {
-  const trimmed = text.trim();
-  if (trimmed === '') return { mm: undefined };
-  if (keepMm !== undefined && trimmed === formatLength(keepMm, unit)) return { mm: keepMm };
-  let mm: number;
-  try {
-    mm = parseLength(trimmed, unit);
-  } catch (error) {
-    if (error instanceof LengthParseError) return { error: capitalise(error.message) + '.' };
-    throw error;
-  }
-  if (mm <= 0) return { error: 'Give a length above 0.' };
-  if (mm > max) return { error: `That is over ${formatLength(max, unit)}: check the number and its unit.` };
-  return { mm };
-}
+export { readLength };
 
 // ---------------------------------------------------------------------------------------------
 // Dates

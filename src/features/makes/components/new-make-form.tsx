@@ -12,7 +12,7 @@ import { useCreateProfile } from '../api/create-profile';
 import { usePatternChoices, type PatternChoice } from '../api/get-pattern-choices';
 import { useProfiles, type Measurements } from '../api/get-profiles';
 import type { MakeDetail } from '../api/schemas';
-import { readMeasurement } from '../lengths';
+import { readLength } from '../../../lib/read-length';
 import { measurementLabels, quickMeasurements } from './measurement-labels';
 
 const NEW_PROFILE = '__new__';
@@ -102,7 +102,7 @@ export function NewMakeForm({
     if (profileChoice === NEW_PROFILE) {
       if (profileName.trim() === '') problems['profile.name'] = 'Enter a name for the profile.';
       for (const key of quickMeasurements) {
-        const read = readMeasurement(measurementText[key] ?? '', units);
+        const read = readLength(measurementText[key] ?? '', units);
         if ('error' in read) problems[`profile.measurements.${key}`] = read.error;
         else if (read.mm !== undefined) measurements[key] = read.mm;
       }
