@@ -3,22 +3,11 @@
  * e-mailed link (read from the admin outbox), a display-name change that the app shell shows
  * at once, and a form token gone stale because the session changed in another tab.
  */
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { useBrowserSession } from '../support/browser.ts';
 
-import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 
 const session = useBrowserSession();
-
-async function signIn(target: Page, email: string, password = DEMO_PASSWORD) {
-  await target.goto(`${session.url}/sign-in`);
-  await target.getByRole('heading', { name: 'Sign in', level: 1 }).waitFor();
-  await target.getByLabel('E-mail address').fill(email);
-  await target.getByLabel('Password').fill(password);
-  await target.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await target.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
-}
 
 describe('when a sewist forgets their password', () => {
   it('then the e-mailed link sets a new one, once, and the new one signs in', async () => {
@@ -27,7 +16,7 @@ describe('when a sewist forgets their password', () => {
     await session.page.getByRole('button', { name: 'Send reset link' }).click();
     await session.page.getByText('we have sent it a link').waitFor();
 
-    await signIn(session.page, 'admin@loomhollow.example');
+    await session.signIn(session.page, 'admin@loomhollow.example');
     await session.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
     await session.page.getByRole('heading', { name: 'Outbox', level: 1 }).waitFor();
     const message = session.page.getByRole('listitem').filter({ hasText: 'rui@loomhollow.example' }).first();
@@ -54,14 +43,14 @@ describe('when a sewist forgets their password', () => {
     await session.page.getByRole('alert').filter({ hasText: 'expired or has already been used' }).waitFor();
     expect(await session.page.getByRole('link', { name: 'Ask for a new one' }).count()).toBe(1);
 
-    await signIn(session.page, 'rui@loomhollow.example', newPassword);
+    await session.signIn(session.page, 'rui@loomhollow.example', newPassword);
     expect(await session.page.getByRole('heading', { name: 'Hello, Rui Tallis', level: 1 }).count()).toBe(1);
   });
 });
 
 describe('when a sewist renames themself after their session changed in another tab', () => {
   it('then the stale form token is replaced once and the new name shows in the shell', async () => {
-    await signIn(session.page, 'ada@loomhollow.example');
+    await session.signIn(session.page, 'ada@loomhollow.example');
     await session.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Account' }).click();
     await session.page.getByRole('heading', { name: 'Account', level: 1 }).waitFor();
     // Saving once makes this tab fetch and keep a form token for the current session.
@@ -74,7 +63,7 @@ describe('when a sewist renames themself after their session changed in another 
     await other.goto(session.url);
     await other.getByRole('button', { name: 'Sign out' }).click();
     await other.getByRole('heading', { name: 'Sign in', level: 1 }).waitFor();
-    await signIn(other, 'ada@loomhollow.example');
+    await session.signIn(other, 'ada@loomhollow.example');
     await other.close();
 
     const patches: number[] = [];

@@ -8,27 +8,13 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { FIT_GIRTH_TOLERANCE, chartFromPattern, demoPattern, formatLength, planFit } from '../../geometry/index.ts';
-import { DEMO_PASSWORD, DEMO_PATTERN_NAME, demoPrintedSizeChart } from '../../server/seed/demo.ts';
+import { DEMO_PATTERN_NAME, demoPrintedSizeChart } from '../../server/seed/demo.ts';
 import { useBrowserSession } from '../support/browser.ts';
 
 const session = useBrowserSession();
 const shots = 'test-output/e2e';
 // 1 in = 25.4 mm exactly (international yard and pound agreement, 1959).
 const IN = 25.4;
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${session.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
-}
-
-async function api<T>(page: Page, url: string): Promise<T> {
-  const response = await page.request.get(`${session.url}${url}`);
-  expect(response.status(), url).toBe(200);
-  return (await response.json()) as T;
-}
 
 async function savedAs(page: Page): Promise<number> {
   const status = page.getByRole('status', { name: 'Save status' });
@@ -57,7 +43,7 @@ describe('planning a make\'s fit', () => {
     const page = session.page;
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
 
     // 1. A profile on the Fit planner screen (Rui's units are inches).
     await page.goto(`${session.url}/fit-planner`);
@@ -75,7 +61,7 @@ describe('planning a make\'s fit', () => {
     await page.getByRole('heading', { name: 'Rui, fitted', level: 2 }).waitFor();
 
     // 2. A make of the library pattern with that profile.
-    const { patterns } = await api<{ patterns: { id: string; name: string }[] }>(page, '/api/patterns?scope=library');
+    const { patterns } = await session.getJson<{ patterns: { id: string; name: string }[] }>(page, '/api/patterns?scope=library');
     const pattern = patterns.find((p) => p.name === DEMO_PATTERN_NAME)!;
     await page.goto(`${session.url}/makes?new=${pattern.id}`);
     await page.getByRole('heading', { name: 'New make', level: 2 }).waitFor();
@@ -92,7 +78,7 @@ describe('planning a make\'s fit', () => {
     // size per level is what geometry's planner gives for the same body against the same table:
     // the pattern's printed one by default, the one measured on the pieces when chosen.
     const profile = Object.fromEntries(Object.entries(BODY_IN).map(([k, v]) => [k, v * IN]));
-    const { printed } = await api<{ printed: unknown }>(page, `/api/patterns/${pattern.id}/size-chart`);
+    const { printed } = await session.getJson<{ printed: unknown }>(page, `/api/patterns/${pattern.id}/size-chart`);
     expect(printed).not.toBeNull();
     await page.getByRole('button', { name: 'Plan the fit' }).click();
     await page.getByLabel('Size table').selectOption('measured');
@@ -157,7 +143,7 @@ describe('planning a make\'s fit', () => {
     await page.getByLabel('What to change next time').fill('Cut the waistband a little longer.');
     await page.getByRole('button', { name: 'Save the fit note' }).click();
     await page.getByText('Fit note saved.').waitFor();
-    const makes = await api<{ makes: { id: string; name: string; fitNote: { levels: Record<string, { verdict: string; amount?: number }> } | null }[] }>(page, '/api/makes');
+    const makes = await session.getJson<{ makes: { id: string; name: string; fitNote: { levels: Record<string, { verdict: string; amount?: number }> } | null }[] }>(page, '/api/makes');
     const saved = makes.makes.find((m) => m.name === 'Grey twill trousers')!;
     expect(saved.fitNote!.levels.waist!.verdict).toBe('tight');
     expect(saved.fitNote!.levels.waist!.amount).toBeCloseTo(IN / 2, 6);
@@ -194,7 +180,7 @@ describe('planning a make\'s fit', () => {
     await page.getByRole('button', { name: 'Plan the fit' }).click();
     await page.getByLabel('Fabric', { exact: true }).selectOption({ label: 'Grey stretch twill' });
     await expect.poll(() => page.getByLabel('Fabric', { exact: true }).isEnabled()).toBe(true);
-    const again2 = (await api<{ makes: { name: string; fabricId: string | null }[] }>(page, '/api/makes')).makes.find((m) => m.name === 'Grey twill trousers (again)')!;
+    const again2 = (await session.getJson<{ makes: { name: string; fabricId: string | null }[] }>(page, '/api/makes')).makes.find((m) => m.name === 'Grey twill trousers (again)')!;
     expect(again2.fabricId).not.toBeNull();
     await page.getByRole('button', { name: 'Make the plan' }).click();
     await page.getByRole('table', { name: 'Size per level' }).getByRole('row', { name: 'hip' }).waitFor({ timeout: 30_000 });
@@ -216,8 +202,8 @@ describe('planning a make\'s fit', () => {
 describe('the pattern\'s size table', () => {
   it('when Mina pastes her printed chart and saves it, then printed − measured shows per cell, marked over ¼ in, and Rui sees it read-only', async () => {
     const page = session.page;
-    await signIn(page, 'mina@loomhollow.example');
-    const { patterns } = await api<{ patterns: { id: string; name: string }[] }>(page, '/api/patterns?scope=mine');
+    await session.signIn(page, 'mina@loomhollow.example');
+    const { patterns } = await session.getJson<{ patterns: { id: string; name: string }[] }>(page, '/api/patterns?scope=mine');
     const pattern = patterns.find((p) => p.name === DEMO_PATTERN_NAME)!;
     // The measured chart of the demo pattern, from geometry, to write a printed chart against it.
     const measured = chartFromPattern(demoPattern());
@@ -264,12 +250,12 @@ describe('the pattern\'s size table', () => {
     await section.getByRole('radio', { name: 'Finished garment' }).click();
 
     // Kept on the server: the hip of size a in mm.
-    const charts = await api<{ printed: { sizes: { size: string; garment: Record<string, number> }[] } }>(page, `/api/patterns/${pattern.id}/size-chart`);
+    const charts = await session.getJson<{ printed: { sizes: { size: string; garment: Record<string, number> }[] } }>(page, `/api/patterns/${pattern.id}/size-chart`);
     expect(charts.printed.sizes.find((s) => s.size === a!.size)!.garment.hip).toBeCloseTo(a!.garment.hip! + IN / 2, 1);
 
     // Rui may see the shared pattern: the table is there, not editable.
     await session.context.clearCookies();
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
     await page.goto(`${session.url}/patterns/${pattern.id}`);
     const readOnly = page.getByRole('region', { name: 'Size table' });
     await readOnly.getByRole('table', { name: 'Printed finished measurements' }).waitFor({ timeout: 20_000 });

@@ -12,29 +12,13 @@
  * summary in trade reference §4.4). The bodies and cloths are invented.
  */
 import path from 'node:path';
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 import { useBrowserSession } from '../support/browser.ts';
 
 const session = useBrowserSession();
 const screenshotDir = path.resolve('test-output', 'e2e');
 const MM_PER_INCH = 25.4; // exact, 1959 international yard and pound agreement
 const GSM_PER_OZ_PER_SQ_YD = 28.349523125 / (0.9144 * 0.9144); // exact ounce (g) / exact square yard (m²)
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${session.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
-}
-
-async function api<T>(page: Page, url: string): Promise<T> {
-  const response = await page.request.get(`${session.url}${url}`);
-  expect(response.status(), url).toBe(200);
-  return (await response.json()) as T;
-}
 
 type GirthAtHeight = { offset: number; girth: number };
 type ProfileDto = { id: string; name: string; takenOn: string; measurements: Record<string, number>; girthsAtHeights: GirthAtHeight[] };
@@ -44,7 +28,7 @@ type FabricDto = { id: string; name: string; properties: Record<string, unknown>
 describe('when Rui keeps measurement profiles', () => {
   it('then a profile typed in inches is saved, measured again later, and the history shows both dates with the change', async () => {
     const { page } = session;
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
     await page.getByRole('link', { name: 'Fit planner' }).first().click();
     await page.getByRole('heading', { name: 'Fit planner', level: 1 }).waitFor();
 
@@ -68,7 +52,7 @@ describe('when Rui keeps measurement profiles', () => {
     await page.getByRole('button', { name: 'Save the profile' }).click();
     await page.getByRole('heading', { name: 'Rui, winter', level: 2 }).waitFor();
 
-    const created = (await api<{ profiles: ProfileDto[] }>(page, '/api/profiles')).profiles.find((p) => p.name === 'Rui, winter');
+    const created = (await session.getJson<{ profiles: ProfileDto[] }>(page, '/api/profiles')).profiles.find((p) => p.name === 'Rui, winter');
     expect(created).toBeDefined();
     expect(created!.takenOn).toBe('2026-01-10');
     expect(created!.measurements.waistGirth).toBeCloseTo(32.5 * MM_PER_INCH, 9); // 825.5 mm
@@ -85,7 +69,7 @@ describe('when Rui keeps measurement profiles', () => {
     await page.getByLabel('Waist girth', { exact: true }).fill('thirty three');
     await page.getByRole('button', { name: 'Save as a new dated set' }).click();
     await page.getByText('is not a length').waitFor();
-    expect((await api<{ profile: { history: SetDto[] } }>(page, `/api/profiles/${created!.id}`)).profile.history).toHaveLength(1);
+    expect((await session.getJson<{ profile: { history: SetDto[] } }>(page, `/api/profiles/${created!.id}`)).profile.history).toHaveLength(1);
 
     await page.getByLabel('Waist girth', { exact: true }).fill('33');
     await page.getByLabel('Taken on').fill('2026-02-20');
@@ -124,7 +108,7 @@ describe('when Rui keeps measurement profiles', () => {
     await page.screenshot({ path: path.join(screenshotDir, 'fit-planner-history.png'), fullPage: true });
 
     // The API keeps both sets, newest first; the first is unchanged and the unchanged hip is exact.
-    const detail = (await api<{ profile: { takenOn: string; history: SetDto[] } }>(page, `/api/profiles/${created!.id}`)).profile;
+    const detail = (await session.getJson<{ profile: { takenOn: string; history: SetDto[] } }>(page, `/api/profiles/${created!.id}`)).profile;
     expect(detail.takenOn).toBe('2026-02-20');
     expect(detail.history.map((s) => s.takenOn)).toEqual(['2026-02-20', '2026-01-10']);
     expect(detail.history[0]!.measurements.waistGirth).toBeCloseTo(33 * MM_PER_INCH, 9);
@@ -149,7 +133,7 @@ describe('when Rui keeps measurement profiles', () => {
     await page.getByRole('alertdialog').getByText('Delete “Rui, cold months” and its 2 dated sets?').waitFor();
     await page.getByRole('button', { name: 'Delete for good' }).click();
     await page.getByRole('button', { name: /^Rui, cold months/ }).waitFor({ state: 'detached' });
-    const left = (await api<{ profiles: ProfileDto[] }>(page, '/api/profiles')).profiles.map((p) => p.name);
+    const left = (await session.getJson<{ profiles: ProfileDto[] }>(page, '/api/profiles')).profiles.map((p) => p.name);
     expect(left).toEqual(['Rui']);
   });
 });
@@ -157,7 +141,7 @@ describe('when Rui keeps measurement profiles', () => {
 describe('when Rui records a fabric', () => {
   it('then a hand stretch test and a weight in oz/yd² show as % and g/m², are kept, and a refusal lands beside its field', async () => {
     const { page } = session;
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
     await page.goto(`${session.url}/fabrics`);
     await page.getByRole('heading', { name: 'Fabrics', level: 1 }).waitFor();
     await page.getByRole('button', { name: 'New fabric' }).click();
@@ -193,7 +177,7 @@ describe('when Rui records a fabric', () => {
     await page.getByRole('button', { name: 'Save the fabric' }).click();
     await page.getByText('must be 60 or less').waitFor();
     expect(await page.getByLabel('Weight', { exact: true }).getAttribute('aria-invalid')).toBe('true');
-    expect((await api<{ fabrics: FabricDto[] }>(page, '/api/fabrics')).fabrics).toHaveLength(0);
+    expect((await session.getJson<{ fabrics: FabricDto[] }>(page, '/api/fabrics')).fabrics).toHaveLength(0);
 
     await page.getByRole('button', { name: 'Save the fabric' }).click();
     await page.getByText('“Stretch twill” is saved.').waitFor();
@@ -202,7 +186,7 @@ describe('when Rui records a fabric', () => {
     expect(await card.innerText()).toContain('406.9 g/m² · 12.00 oz/yd²');
     await page.screenshot({ path: path.join(screenshotDir, 'fabrics.png'), fullPage: true });
 
-    const fabric = (await api<{ fabrics: FabricDto[] }>(page, '/api/fabrics')).fabrics.find((f) => f.name === 'Stretch twill');
+    const fabric = (await session.getJson<{ fabrics: FabricDto[] }>(page, '/api/fabrics')).fabrics.find((f) => f.name === 'Stretch twill');
     expect(fabric?.properties).toMatchObject({ weightOzPerSqYd: 12 });
     const across = fabric!.properties.stretchAcross as { relaxed: number; stretched: number };
     expect(across.relaxed).toBeCloseTo(4 * MM_PER_INCH, 9);
@@ -219,11 +203,11 @@ describe('when Rui records a fabric', () => {
     await page.getByLabel('Recovery').fill('90');
     await page.getByRole('button', { name: 'Save the fabric' }).click();
     await card.getByText('90 %').waitFor();
-    const edited = (await api<{ fabric: FabricDto }>(page, `/api/fabrics/${fabric!.id}`)).fabric;
+    const edited = (await session.getJson<{ fabric: FabricDto }>(page, `/api/fabrics/${fabric!.id}`)).fabric;
     expect(edited.properties).toMatchObject({ recovery: 90, weightOzPerSqYd: 12, stretchAcross: across });
     await page.getByRole('button', { name: 'Delete Stretch twill' }).click();
     await page.getByRole('button', { name: 'Delete for good' }).click();
     await card.waitFor({ state: 'detached' });
-    expect((await api<{ fabrics: FabricDto[] }>(page, '/api/fabrics')).fabrics).toHaveLength(0);
+    expect((await session.getJson<{ fabrics: FabricDto[] }>(page, '/api/fabrics')).fabrics).toHaveLength(0);
   });
 });

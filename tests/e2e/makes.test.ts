@@ -12,27 +12,13 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, DEMO_PATTERN_NAME } from '../../server/seed/demo.ts';
+import { DEMO_PATTERN_NAME } from '../../server/seed/demo.ts';
 import { useBrowserSession } from '../support/browser.ts';
 
 const session = useBrowserSession();
 const screenshotDir = path.resolve('test-output', 'e2e');
 const MM_PER_INCH = 25.4; // exact, by the 1959 international yard and pound agreement
 const PT_PER_MM = 72 / MM_PER_INCH; // ISO 32000-1: default user space unit 1/72 in
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${session.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
-}
-
-async function api<T>(page: Page, url: string): Promise<T> {
-  const response = await page.request.get(`${session.url}${url}`);
-  expect(response.status(), url).toBe(200);
-  return (await response.json()) as T;
-}
 
 type MakeSummary = { id: string; name: string; sourceMakeId: string | null; profile: { name: string } | null; archived: boolean };
 
@@ -42,10 +28,10 @@ const makeCard = (page: Page, name: string) =>
 describe('when Rui keeps makes', () => {
   it('then a make starts from the library pattern with a new profile, is renamed, sewn again and archived', async () => {
     const { page } = session;
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
 
     // The library links to /makes?new=<patternId>: the form opens with that pattern chosen.
-    const { patterns } = await api<{ patterns: { id: string; name: string }[] }>(page, '/api/patterns?scope=library');
+    const { patterns } = await session.getJson<{ patterns: { id: string; name: string }[] }>(page, '/api/patterns?scope=library');
     const libraryPattern = patterns.find((p) => p.name === DEMO_PATTERN_NAME);
     expect(libraryPattern).toBeDefined();
     await page.goto(`${session.url}/makes?new=${libraryPattern!.id}`);
@@ -59,7 +45,7 @@ describe('when Rui keeps makes', () => {
     await page.getByLabel('Waist girth').fill('thirty');
     await page.getByRole('button', { name: 'Start the make' }).click();
     await page.getByText('is not a length').waitFor();
-    expect((await api<{ profiles: unknown[] }>(page, '/api/profiles')).profiles).toHaveLength(1);
+    expect((await session.getJson<{ profiles: unknown[] }>(page, '/api/profiles')).profiles).toHaveLength(1);
 
     // Rui's units are inches: a bare number is inches, and a typed unit is honoured.
     await page.getByLabel('Waist girth').fill('32 1/2');
@@ -71,7 +57,7 @@ describe('when Rui keeps makes', () => {
     expect(await created.innerText()).toContain('Rui, December');
     expect(await created.innerText()).toContain(DEMO_PATTERN_NAME);
 
-    const { profiles } = await api<{ profiles: { name: string; measurements: Record<string, number> }[] }>(page, '/api/profiles');
+    const { profiles } = await session.getJson<{ profiles: { name: string; measurements: Record<string, number> }[] }>(page, '/api/profiles');
     const profile = profiles.find((p) => p.name === 'Rui, December');
     expect(profile?.measurements.waistGirth).toBeCloseTo(32.5 * MM_PER_INCH, 6); // 825.5 mm
     expect(profile?.measurements.hipGirth).toBeCloseTo(940, 6);
@@ -84,12 +70,12 @@ describe('when Rui keeps makes', () => {
     expect(await makeCard(page, 'Wool winter trousers').count()).toBe(0);
 
     // Sew it again: a new make from this one, opened at once.
-    const before = (await api<{ makes: MakeSummary[] }>(page, '/api/makes?archived=false')).makes;
+    const before = (await session.getJson<{ makes: MakeSummary[] }>(page, '/api/makes?archived=false')).makes;
     const original = before.find((m) => m.name === 'Navy wool trousers')!;
     await page.getByRole('button', { name: 'Sew Navy wool trousers again' }).click();
     await page.waitForURL((url) => /^\/makes\/[0-9a-f-]{36}$/.test(url.pathname) && !url.pathname.endsWith(original.id));
     const copyId = new URL(page.url()).pathname.split('/').pop()!;
-    const copy = (await api<{ make: MakeSummary }>(page, `/api/makes/${copyId}`)).make;
+    const copy = (await session.getJson<{ make: MakeSummary }>(page, `/api/makes/${copyId}`)).make;
     expect(copy.sourceMakeId).toBe(original.id);
     expect(copy.name).toBe('Navy wool trousers (again)');
     expect(copy.profile?.name).toBe('Rui, December');
@@ -105,7 +91,7 @@ describe('when Rui keeps makes', () => {
     expect(await page.getByRole('button', { name: 'Bring back Navy wool trousers (again)' }).count()).toBe(1);
     expect(new URL(page.url()).searchParams.get('show')).toBe('archived');
     await page.screenshot({ path: path.join(screenshotDir, 'makes-archived.png'), fullPage: true });
-    const archived = (await api<{ makes: MakeSummary[] }>(page, '/api/makes?archived=true')).makes;
+    const archived = (await session.getJson<{ makes: MakeSummary[] }>(page, '/api/makes?archived=true')).makes;
     expect(archived.map((m) => m.id)).toEqual([copyId]);
   });
 });
@@ -113,7 +99,7 @@ describe('when Rui keeps makes', () => {
 describe('when Rui switches to centimetres and prints a make', () => {
   it('then lengths show in cm, a bad margin is refused, and the print arrives as an A4 PDF', async () => {
     const { page } = session;
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
 
     // In inches, the default margin of 6.35 mm reads 1/4 in (6.35 / 25.4 = 0.25).
     await page.goto(`${session.url}/makes`);
@@ -135,11 +121,11 @@ describe('when Rui switches to centimetres and prints a make', () => {
     expect(await dialog.getByRole('note', { name: 'Before you print' }).innerText()).toContain('Print at 100 %');
 
     // A margin past the API's 50 mm is refused on the spot and queues nothing.
-    const printsBefore = (await api<{ prints: unknown[] }>(page, '/api/prints')).prints.length;
+    const printsBefore = (await session.getJson<{ prints: unknown[] }>(page, '/api/prints')).prints.length;
     await dialog.getByLabel('Margin').fill('2 in');
     await dialog.getByRole('button', { name: 'Make the print' }).click();
     await dialog.getByText('Use a length from 0 cm to 5 cm.').waitFor();
-    expect((await api<{ prints: unknown[] }>(page, '/api/prints')).prints).toHaveLength(printsBefore);
+    expect((await session.getJson<{ prints: unknown[] }>(page, '/api/prints')).prints).toHaveLength(printsBefore);
 
     await dialog.getByLabel('Margin').fill('0.635');
     await dialog.getByLabel('Paper').selectOption('a4');
@@ -152,7 +138,7 @@ describe('when Rui switches to centimetres and prints a make', () => {
     const href = await ready.getByRole('link', { name: 'Download PDF' }).getAttribute('href');
     expect(href).toMatch(/^\/api\/prints\/[0-9a-f-]{36}\/file$/);
     const printId = href!.split('/')[3]!;
-    const job = (await api<{ print: { pageCount: number; emptyPages: string[]; options: Record<string, unknown> } }>(page, `/api/prints/${printId}`)).print;
+    const job = (await session.getJson<{ print: { pageCount: number; emptyPages: string[]; options: Record<string, unknown> } }>(page, `/api/prints/${printId}`)).print;
     expect(job.options).toMatchObject({ paper: 'a4', format: 'pdf', orientation: 'auto' });
     expect(job.options.margin).toBeCloseTo(6.35, 9);
     expect(readyText).toContain(`${job.pageCount} pages`);

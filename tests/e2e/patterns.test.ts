@@ -13,7 +13,6 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { contourBounds, demoPattern, edgeLength, outlineContour, parsePattern, type Pattern, type Piece, type Point } from '../../geometry/index.ts';
-import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 import type { Bounds, PieceOffset } from '../../src/components/pattern-canvas/layout.ts';
 import { fitTransform, pieceToWorld, worldToScreen } from '../../src/components/pattern-canvas/view-math.ts';
 import { useBrowserSession } from '../support/browser.ts';
@@ -37,15 +36,6 @@ beforeAll(async () => {
 afterAll(async () => {
   if (fileDir) await rm(fileDir, { recursive: true, force: true });
 });
-
-async function signIn(page: Page, email: string) {
-  await page.goto(`${session.url}/sign-in`);
-  await page.getByRole('heading', { name: 'Sign in', level: 1 }).waitFor();
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
-}
 
 async function signOut(page: Page) {
   await page.getByRole('button', { name: 'Sign out' }).click();
@@ -96,7 +86,7 @@ describe('when a sewist uploads a multi-size SVG and labels it', () => {
 
   it('then the pieces and sizes show, and the names, lengthen/shorten lines and the clicked inseam are saved', async () => {
     const page = session.page;
-    await signIn(page, sewist);
+    await session.signIn(page, sewist);
     const id = await upload(page, 'Studio trousers');
 
     // 2 pieces × 3 sizes, as the file has them
@@ -186,7 +176,7 @@ describe('when a sewist uploads a multi-size SVG and labels it', () => {
     const page = session.page;
     if (!labelled) throw new Error('the labelling test above did not finish');
     const { id, frontIndex, backIndex } = labelled;
-    await signIn(page, sewist);
+    await session.signIn(page, sewist);
     await page.goto(`${session.url}/patterns/${id}`);
     await page.reload();
     await page.getByRole('heading', { name: 'Studio trousers', level: 1 }).waitFor();
@@ -207,7 +197,7 @@ describe('when a sewist uploads a multi-size SVG and labels it', () => {
   it('then a make started from it shortens the legs 3 in at the marked line, and the measured inseam is 3 in shorter', async () => {
     const page = session.page;
     if (!labelled) throw new Error('the labelling test above did not finish');
-    await signIn(page, sewist);
+    await session.signIn(page, sewist);
     await page.goto(`${session.url}/makes?new=${labelled.id}`);
     await page.getByLabel('Name of the make').fill('Studio toile');
     await page.getByRole('button', { name: 'Start the make' }).click();
@@ -231,7 +221,7 @@ describe('when a sewist uploads a multi-size SVG and labels it', () => {
 describe('when a bad file is uploaded', () => {
   it('then the importer’s reason is shown and nothing is added', async () => {
     const page = session.page;
-    await signIn(page, otherSewist);
+    await session.signIn(page, otherSewist);
     const bad = path.join(fileDir, 'notes.svg');
     await writeFile(bad, '<svg xmlns="http://www.w3.org/2000/svg"><text>no outlines here</text></svg>');
     await page.goto(`${session.url}/patterns`);
@@ -246,7 +236,7 @@ describe('when a bad file is uploaded', () => {
 describe('when a coach publishes a pattern', () => {
   it('then it shows in another person’s shared library, read-only with a way to start a make', async () => {
     const page = session.page;
-    await signIn(page, coach);
+    await session.signIn(page, coach);
     const id = await upload(page, 'Coach straight leg');
     // A make on it (made through the API: the makes area owns its own screens) keeps it from being deleted.
     const csrf = ((await (await page.request.get(`${session.url}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
@@ -261,7 +251,7 @@ describe('when a coach publishes a pattern', () => {
     await page.getByRole('listitem', { name: 'Coach straight leg' }).getByText('In the shared library').waitFor();
     await signOut(page);
 
-    await signIn(page, otherSewist);
+    await session.signIn(page, otherSewist);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Shared library' }).click();
     await page.getByRole('heading', { name: 'Shared library', level: 1 }).waitFor();
     const card = page.getByRole('listitem', { name: 'Coach straight leg' });

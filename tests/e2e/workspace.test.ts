@@ -4,19 +4,10 @@
  */
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 import { useBrowserSession } from '../support/browser.ts';
 
 const session = useBrowserSession();
 const shots = 'test-output/e2e';
-
-async function signIn(target: Page, email: string) {
-  await target.goto(`${session.url}/sign-in`);
-  await target.getByLabel('E-mail address').fill(email);
-  await target.getByLabel('Password').fill(DEMO_PASSWORD);
-  await target.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await target.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
-}
 
 async function openMake(target: Page, name: string) {
   await target.goto(`${session.url}/makes`);
@@ -29,7 +20,7 @@ describe('the seeded make', () => {
   it('when Ada opens her make, then the pieces, the alterations and the measurements are there', async () => {
     const errors: string[] = [];
     session.page.on('pageerror', (e) => errors.push(e.message));
-    await signIn(session.page, 'ada@loomhollow.example');
+    await session.signIn(session.page, 'ada@loomhollow.example');
     await openMake(session.page, 'Everyday jeans');
     const list = session.page.getByRole('list', { name: 'Alterations' });
     expect(await list.getByRole('listitem').count()).toBe(3);
@@ -57,7 +48,7 @@ async function savedAs(target: Page): Promise<number> {
 describe('altering a make', () => {
   it('when Rui blends sizes by level, shortens the legs 3 in and adds 2 in of rise, then the measurements move by those amounts, it is all saved, and undo/redo work', async () => {
     const page = session.page;
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
     await openMake(page, 'Linen summer trousers');
     const tools = page.getByRole('region', { name: 'Tools' });
     const alterations = page.getByRole('list', { name: 'Alterations' });
@@ -119,7 +110,7 @@ describe('altering a make', () => {
 
 describe('two sessions on one make', () => {
   it('when a second session saves from a stale revision, then it gets the conflict choice, and "apply my change on top" keeps both changes', async () => {
-    await signIn(session.page, 'ada@loomhollow.example');
+    await session.signIn(session.page, 'ada@loomhollow.example');
     const first = session.page;
     const second = await session.context.newPage();
     try {
@@ -180,7 +171,7 @@ describe('two sessions on one make', () => {
 describe('the fit plan', () => {
   it('when Rui plans the fit of his make, then a size per level shows with reasons, and its alterations replace the list\'s sizes and lengths', async () => {
     const page = session.page;
-    await signIn(page, 'rui@loomhollow.example');
+    await session.signIn(page, 'rui@loomhollow.example');
     await openMake(page, 'Linen summer trousers');
     await page.getByRole('button', { name: 'Plan the fit' }).click();
     await page.getByLabel('Stretch across the grain, %').fill('0');

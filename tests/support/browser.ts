@@ -3,7 +3,8 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
-import { afterAll, beforeAll, beforeEach } from 'vitest';
+import { afterAll, beforeAll, beforeEach, expect } from 'vitest';
+import { DEMO_PASSWORD } from '../../server/seed/demo.ts';
 import { installDebianPackages } from '../../server/system/debian.ts';
 import { startTestApp } from './app-server.ts';
 
@@ -46,6 +47,10 @@ export interface BrowserSession {
   readonly context: BrowserContext;
   /** The context's first page. */
   readonly page: Page;
+  /** Sign in on the sign-in page as a demo account (or with `password`), and wait for the home page. */
+  signIn(page: Page, email: string, password?: string): Promise<void>;
+  /** GET an API address with the page's cookies; expects 200 and returns the JSON body. */
+  getJson<T>(page: Page, url: string): Promise<T>;
 }
 
 /**
@@ -87,6 +92,19 @@ export function useBrowserSession(): BrowserSession {
     },
     get page() {
       return ready(page);
+    },
+    async signIn(target: Page, email: string, password = DEMO_PASSWORD) {
+      await target.goto(`${ready(app).url}/sign-in`);
+      await target.getByRole('heading', { name: 'Sign in', level: 1 }).waitFor();
+      await target.getByLabel('E-mail address').fill(email);
+      await target.getByLabel('Password').fill(password);
+      await target.getByRole('button', { name: 'Sign in', exact: true }).click();
+      await target.getByRole('heading', { name: /^Hello, /, level: 1 }).waitFor();
+    },
+    async getJson<T>(target: Page, url: string): Promise<T> {
+      const response = await target.request.get(`${ready(app).url}${url}`);
+      expect(response.status(), url).toBe(200);
+      return (await response.json()) as T;
     },
   };
 }
