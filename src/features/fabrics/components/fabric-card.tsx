@@ -1,8 +1,7 @@
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { ConfirmDelete } from '../../../components/ui/confirm-delete';
 import { formatLength, type LengthUnit } from '../../../../geometry/units';
-import { formErrorsOf } from '../../../lib/form-errors';
 import { useDeleteFabric } from '../api/delete-fabric';
 import type { Fabric } from '../api/schemas';
 import { useUpdateFabric } from '../api/update-fabric';
@@ -86,23 +85,14 @@ export function FabricCard({ fabric, unit }: { fabric: Fabric; unit: LengthUnit 
         </dl>
         <p className="mt-3 text-sm text-ink-700">{advice.text}</p>
         {mode === 'delete' ? (
-          <div role="alertdialog" aria-label={`Delete ${fabric.name}?`} className="mt-4 rounded-md border border-madder-700/40 bg-madder-50 p-3">
-            <p className="font-semibold text-madder-700">Delete “{fabric.name}”? This cannot be undone.</p>
-            <FormAlert className="mt-2 empty:hidden">{remove.error ? formErrorsOf({}, remove.error).message : null}</FormAlert>
-            <div className="mt-3 flex gap-2">
-              <Button
-                className="bg-madder-700 px-3 py-1.5 hover:bg-madder-700/90"
-                pending={remove.isPending}
-                pendingLabel="Deleting…"
-                onClick={() => remove.mutate(fabric.id)}
-              >
-                Delete for good
-              </Button>
-              <Button variant="secondary" className="px-3 py-1.5" autoFocus onClick={() => setMode('view')}>
-                Keep it
-              </Button>
-            </div>
-          </div>
+          <ConfirmDelete
+            className="mt-4 p-3"
+            question={`Delete “${fabric.name}”? This cannot be undone.`}
+            pending={remove.isPending}
+            error={remove.error}
+            onConfirm={() => remove.mutate(fabric.id)}
+            onCancel={() => setMode('view')}
+          />
         ) : (
           <div role="group" aria-label={`Actions for ${fabric.name}`} className="mt-4 flex flex-wrap gap-2">
             <Button variant="secondary" className="px-3 py-1.5" aria-label={`Edit ${fabric.name}`} onClick={() => setMode('edit')}>

@@ -1,8 +1,8 @@
-import { useId, useState, type FormEvent, type KeyboardEvent } from 'react';
+import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { TextField } from '../../../components/ui/text-field';
+import { RenameForm } from '../../../components/ui/rename-form';
 import { paths } from '../../../config/paths';
 import { formErrorsOf } from '../../../lib/form-errors';
 import type { MakeDetail, MakeSummary } from '../api/schemas';
@@ -14,59 +14,26 @@ const savedFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', ti
 const actionClasses =
   'inline-flex items-center justify-center gap-2 rounded-md px-3 py-1.5 text-sm font-semibold transition-colors';
 
+function MakeRename({ make, onDone }: { make: MakeSummary; onDone: () => void }) {
+  const update = useUpdateMake();
+  return (
+    <RenameForm
+      current={make.name}
+      what="make"
+      maxLength={120}
+      pending={update.isPending}
+      error={update.error}
+      onRename={(name) => update.mutate({ id: make.id, name }, { onSuccess: onDone })}
+      onDone={onDone}
+    />
+  );
+}
+
 function alterationsText(count: number): string {
   if (count === 0) return 'None yet';
   return count === 1 ? '1 alteration' : `${count} alterations`;
 }
 
-function RenameForm({
-  make,
-  onDone,
-}: {
-  make: MakeSummary;
-  onDone: () => void;
-}) {
-  const [name, setName] = useState(make.name);
-  const [problem, setProblem] = useState<string | null>(null);
-  const update = useUpdateMake();
-  const errors = formErrorsOf(problem ? { name: problem } : {}, update.error);
-
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const trimmed = name.trim();
-    if (trimmed === '') return setProblem('Enter a name for the make.');
-    if (trimmed.length > 120) return setProblem('Keep the name to 120 characters.');
-    setProblem(null);
-    if (trimmed === make.name) return onDone();
-    update.mutate({ id: make.id, name: trimmed }, { onSuccess: onDone });
-  }
-
-  function handleKeyDown(event: KeyboardEvent<HTMLFormElement>) {
-    if (event.key === 'Escape') onDone();
-  }
-
-  return (
-    <form noValidate onSubmit={handleSubmit} onKeyDown={handleKeyDown} className="flex flex-col gap-2">
-      <TextField
-        label={`New name for “${make.name}”`}
-        name="name"
-        value={name}
-        autoFocus
-        onChange={(event) => setName(event.target.value)}
-        error={errors.fields.name}
-      />
-      {!errors.fields.name && <FormAlert>{errors.message}</FormAlert>}
-      <div className="flex gap-2">
-        <Button type="submit" className="px-3 py-1.5" pending={update.isPending} pendingLabel="Saving…">
-          Save name
-        </Button>
-        <Button variant="quiet" className="px-3 py-1.5" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
-    </form>
-  );
-}
 
 /** One make in the list: what it is, when it was last saved, and what can be done with it. */
 export function MakeCard({
@@ -92,7 +59,7 @@ export function MakeCard({
         className="rounded-lg border border-calico-300 bg-calico-50 p-5 shadow-[0_1px_0_rgb(197_182_151/0.6)]"
       >
         {renaming ? (
-          <RenameForm make={make} onDone={() => setRenaming(false)} />
+          <MakeRename make={make} onDone={() => setRenaming(false)} />
         ) : (
           <h3 id={headingId} className="font-display text-xl font-semibold text-ink-900">
             {make.name}

@@ -1,8 +1,9 @@
-import { useId, useState, type FormEvent, type KeyboardEvent } from 'react';
+import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { TextField } from '../../../components/ui/text-field';
+import { ConfirmDelete } from '../../../components/ui/confirm-delete';
+import { RenameForm } from '../../../components/ui/rename-form';
 import type { LengthUnit } from '../../../../geometry/units';
 import { formErrorsOf } from '../../../lib/form-errors';
 import { useDeleteProfile } from '../api/delete-profile';
@@ -14,76 +15,36 @@ import { draftFrom, formatTakenOn, type DraftOrigin } from '../model';
 import { HistoryTable } from './history-table';
 import { MeasurementsForm } from './measurements-form';
 
-function RenameForm({ profile, onDone }: { profile: Profile; onDone: () => void }) {
-  const [name, setName] = useState(profile.name);
-  const [problem, setProblem] = useState<string | null>(null);
+
+
+function ProfileRename({ profile, onDone }: { profile: Profile; onDone: () => void }) {
   const update = useUpdateProfile();
-  const errors = formErrorsOf(problem ? { name: problem } : {}, update.error);
-
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const trimmed = name.trim();
-    if (trimmed === '') return setProblem('Enter a name for the profile.');
-    if (trimmed.length > 80) return setProblem('Keep the name to 80 characters.');
-    setProblem(null);
-    if (trimmed === profile.name) return onDone();
-    update.mutate({ id: profile.id, name: trimmed }, { onSuccess: onDone });
-  }
-
   return (
-    <form
-      noValidate
-      onSubmit={handleSubmit}
-      onKeyDown={(event: KeyboardEvent<HTMLFormElement>) => event.key === 'Escape' && onDone()}
-      className="flex flex-col gap-2"
-    >
-      <TextField
-        label={`New name for “${profile.name}”`}
-        name="name"
-        value={name}
-        autoFocus
-        onChange={(event) => setName(event.target.value)}
-        error={errors.fields.name}
-      />
-      {!errors.fields.name && <FormAlert>{errors.message}</FormAlert>}
-      <div className="flex gap-2">
-        <Button type="submit" className="px-3 py-1.5" pending={update.isPending} pendingLabel="Saving…">
-          Save name
-        </Button>
-        <Button variant="quiet" className="px-3 py-1.5" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
-    </form>
+    <RenameForm
+      current={profile.name}
+      what="profile"
+      maxLength={80}
+      pending={update.isPending}
+      error={update.error}
+      onRename={(name) => update.mutate({ id: profile.id, name }, { onSuccess: onDone })}
+      onDone={onDone}
+    />
   );
 }
 
-function DeleteConfirm({ profile, onDeleted, onCancel }: { profile: Profile; onDeleted: () => void; onCancel: () => void }) {
+function ProfileDelete({ profile, onDeleted, onCancel }: { profile: Profile; onDeleted: () => void; onCancel: () => void }) {
   const remove = useDeleteProfile({ onSuccess: onDeleted });
   const sets = profile.history.length;
   return (
-    <div role="alertdialog" aria-labelledby="delete-profile-title" className="rounded-md border border-madder-700/40 bg-madder-50 p-4">
-      <p id="delete-profile-title" className="font-semibold text-madder-700">
-        Delete “{profile.name}” and its {sets === 1 ? 'one dated set' : `${sets} dated sets`}?
-      </p>
-      <p className="mt-1 text-sm text-ink-700">
-        This cannot be undone. Makes that use this profile keep their alterations and go on without a profile.
-      </p>
-      <FormAlert className="mt-2 empty:hidden">{remove.error ? formErrorsOf({}, remove.error).message : null}</FormAlert>
-      <div className="mt-3 flex gap-2">
-        <Button
-          className="bg-madder-700 px-3 py-1.5 hover:bg-madder-700/90"
-          pending={remove.isPending}
-          pendingLabel="Deleting…"
-          onClick={() => remove.mutate(profile.id)}
-        >
-          Delete for good
-        </Button>
-        <Button variant="secondary" className="px-3 py-1.5" autoFocus onClick={onCancel}>
-          Keep it
-        </Button>
-      </div>
-    </div>
+    <ConfirmDelete
+      question={`Delete “${profile.name}” and its ${sets === 1 ? 'one dated set' : `${sets} dated sets`}?`}
+      pending={remove.isPending}
+      error={remove.error}
+      onConfirm={() => remove.mutate(profile.id)}
+      onCancel={onCancel}
+    >
+      This cannot be undone. Makes that use this profile keep their alterations and go on without a profile.
+    </ConfirmDelete>
   );
 }
 
@@ -106,7 +67,7 @@ export function ProfileDetail({ id, unit, onDeleted }: { id: string; unit: Lengt
     <section aria-labelledby={headingId} className="flex flex-col gap-5">
       <div>
         {mode === 'rename' ? (
-          <RenameForm profile={data} onDone={() => setMode('view')} />
+          <ProfileRename profile={data} onDone={() => setMode('view')} />
         ) : (
           <h2 id={headingId} className="font-display text-2xl font-semibold text-ink-900">
             {data.name}
@@ -139,7 +100,7 @@ export function ProfileDetail({ id, unit, onDeleted }: { id: string; unit: Lengt
         </div>
       )}
 
-      {mode === 'delete' && <DeleteConfirm profile={data} onDeleted={onDeleted} onCancel={() => setMode('view')} />}
+      {mode === 'delete' && <ProfileDelete profile={data} onDeleted={onDeleted} onCancel={() => setMode('view')} />}
 
       {mode === 'measure' && (
         <div className="rounded-lg border border-dashed border-calico-400 p-4">
