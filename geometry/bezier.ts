@@ -281,33 +281,55 @@ export function solveQuadratic(a: number, b: number, c: number): number[] {
 
 /** Real roots of a·x³ + b·x² + c·x + d = 0 (falls back to quadratic when a ≈ 0). */
 export function solveCubic(a: number, b: number, c: number, d: number): number[] {
+  const out: number[] = [];
+  cubicRootsInto(a, b, c, d, out);
+  return out;
+}
+
+/** Candidate roots of cubicRootsInto before polishing (at most 3 + 2). */
+const CANDIDATES = new Float64Array(5);
+
+/**
+ * solveCubic's roots appended to `out` (which must start empty), in solveCubic's order: the
+ * same arithmetic, without the arrays and objects of the candidates.
+ */
+function cubicRootsInto(a: number, b: number, c: number, d: number, out: number[]): void {
   const scale = Math.max(Math.abs(a), Math.abs(b), Math.abs(c), Math.abs(d));
-  if (scale === 0) return [];
-  if (Math.abs(a) < 1e-12 * scale) return solveQuadratic(b, c, d);
+  if (scale === 0) return;
+  if (Math.abs(a) < 1e-12 * scale) {
+    for (const r of solveQuadratic(b, c, d)) out.push(r);
+    return;
+  }
   const A = b / a;
   const B = c / a;
   const C = d / a;
   const Q = (A * A - 3 * B) / 9;
   const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
-  const roots: number[] = [];
+  const roots = CANDIDATES;
+  let count: number;
   if (R * R < Q * Q * Q) {
     const th = Math.acos(Math.max(-1, Math.min(1, R / Math.sqrt(Q * Q * Q))));
     const m = -2 * Math.sqrt(Q);
-    roots.push(m * Math.cos(th / 3) - A / 3, m * Math.cos((th + 2 * Math.PI) / 3) - A / 3, m * Math.cos((th - 2 * Math.PI) / 3) - A / 3);
+    roots[0] = m * Math.cos(th / 3) - A / 3;
+    roots[1] = m * Math.cos((th + 2 * Math.PI) / 3) - A / 3;
+    roots[2] = m * Math.cos((th - 2 * Math.PI) / 3) - A / 3;
+    count = 3;
   } else {
     const s = -Math.sign(R) * Math.cbrt(Math.abs(R) + Math.sqrt(R * R - Q * Q * Q));
     const u = s === 0 ? 0 : Q / s;
-    roots.push(s + u - A / 3);
+    roots[0] = s + u - A / 3;
+    count = 1;
   }
   // A leading coefficient that is small beside the others (a cubic that is nearly a parabola)
   // makes A, B, C huge and the closed form loses the roots near 0; the parabola's roots, polished
   // on the cubic below, find them.
-  if (Math.abs(a) < 1e-6 * scale) roots.push(...solveQuadratic(b, c, d));
+  if (Math.abs(a) < 1e-6 * scale) for (const r of solveQuadratic(b, c, d)) roots[count++] = r;
   // Newton polish: the closed form loses accuracy at multiple roots (a triple root is only
   // found to ~1e-5·scale^(1/3)); Newton converges there too, linearly, so iterate while |f| falls.
   // A candidate that does not polish into a root (its residual stays above ROOT_RESIDUAL of the
   // coefficients' scale) is dropped, and repeats are merged.
-  const polished = roots.map((x) => {
+  for (let k = 0; k < count; k++) {
+    let x = roots[k]!;
     let fx = ((a * x + b) * x + c) * x + d;
     for (let i = 0; i < 60 && fx !== 0; i++) {
       const df = (3 * a * x + 2 * b) * x + c;
@@ -318,15 +340,12 @@ export function solveCubic(a: number, b: number, c: number, d: number): number[]
       x = nx;
       fx = nf;
     }
-    return { x, fx };
-  });
-  const out: number[] = [];
-  for (const { x, fx } of polished) {
     const size = Math.max(1, Math.abs(x));
     if (!(Math.abs(fx) <= ROOT_RESIDUAL * scale * size * size * size)) continue;
-    if (!out.some((y) => Math.abs(y - x) <= 1e-12 * size)) out.push(x);
+    let repeat = false;
+    for (let j = 0; j < out.length && !repeat; j++) repeat = Math.abs(out[j]! - x) <= 1e-12 * size;
+    if (!repeat) out.push(x);
   }
-  return out;
 }
 
 /** Relative residual below which a polished cubic root is accepted (see solveCubic). */
@@ -340,21 +359,42 @@ const ROOT_RESIDUAL = 1e-9;
 export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
   if (vecLength(direction) < POINT_EPSILON) return [];
   const dl = vecLength(direction);
-  const n = { x: -direction.y / dl, y: direction.x / dl };
-  const s = c.map((p) => n.x * (p.x - origin.x) + n.y * (p.y - origin.y));
-  const [s0, s1, s2, s3] = s as [number, number, number, number];
+  const nx = -direction.y / dl;
+  const ny = direction.x / dl;
+  const ox = origin.x;
+  const oy = origin.y;
+  const s0 = nx * (c[0].x - ox) + ny * (c[0].y - oy);
+  const s1 = nx * (c[1].x - ox) + ny * (c[1].y - oy);
+  const s2 = nx * (c[2].x - ox) + ny * (c[2].y - oy);
+  const s3 = nx * (c[3].x - ox) + ny * (c[3].y - oy);
   if (Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3)) < POINT_EPSILON) return [];
   // Bernstein → power basis.
   const a = -s0 + 3 * s1 - 3 * s2 + s3;
   const b = 3 * s0 - 6 * s1 + 3 * s2;
   const cc = -3 * s0 + 3 * s1;
   const d = s0;
-  const roots = solveCubic(a, b, cc, d)
-    .filter((t) => t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON)
-    .map((t) => Math.min(1, Math.max(0, t)))
-    .sort((x, y) => x - y);
+  // the roots in [0, 1] (within PARAM_EPSILON, clamped), sorted (insertion: at most five), then
+  // without values within 10 PARAM_EPSILON of the one kept before
+  const roots: number[] = [];
+  cubicRootsInto(a, b, cc, d, roots);
+  let n = 0;
+  for (let k = 0; k < roots.length; k++) {
+    const t = roots[k]!;
+    if (!(t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON)) continue;
+    const v = Math.min(1, Math.max(0, t));
+    let j = n - 1;
+    while (j >= 0 && roots[j]! > v) {
+      roots[j + 1] = roots[j]!;
+      j--;
+    }
+    roots[j + 1] = v;
+    n++;
+  }
   const unique: number[] = [];
-  for (const t of roots) if (unique.length === 0 || t - unique[unique.length - 1]! > PARAM_EPSILON * 10) unique.push(t);
+  for (let k = 0; k < n; k++) {
+    const t = roots[k]!;
+    if (unique.length === 0 || t - unique[unique.length - 1]! > PARAM_EPSILON * 10) unique.push(t);
+  }
   return unique;
 }
 
