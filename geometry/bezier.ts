@@ -201,13 +201,42 @@ export function cubicIsStraight(c: Cubic, tolerance = POINT_EPSILON): boolean {
 export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
   // Scalar form of: split at ½ by de Casteljau until cubicFlatness(part) <= tolerance (or
   // depth 20). Same arithmetic as cubicSplit/cubicFlatness, without allocating a point per
-  // step, so the parameters are exactly those of the plain recursion.
+  // step, so the parameters are exactly those of the plain recursion. The recursion runs on an
+  // explicit stack of parts (the right half pushed under the left one), so the leaves come in
+  // the same order, left to right.
   const out = [0];
   const tol2 = tolerance * tolerance;
-  const recurse = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, t0: number, t1: number, depth: number): void => {
+  const st = FLATTEN_STACK;
+  const depths = FLATTEN_DEPTHS;
+  st[0] = c[0].x;
+  st[1] = c[0].y;
+  st[2] = c[1].x;
+  st[3] = c[1].y;
+  st[4] = c[2].x;
+  st[5] = c[2].y;
+  st[6] = c[3].x;
+  st[7] = c[3].y;
+  st[8] = 0;
+  st[9] = 1;
+  depths[0] = 0;
+  let sp = 1;
+  while (sp > 0) {
+    sp--;
+    let o = sp * 10;
+    const x0 = st[o]!;
+    const y0 = st[o + 1]!;
+    const x1 = st[o + 2]!;
+    const y1 = st[o + 3]!;
+    const x2 = st[o + 4]!;
+    const y2 = st[o + 5]!;
+    const x3 = st[o + 6]!;
+    const y3 = st[o + 7]!;
+    const t0 = st[o + 8]!;
+    const t1 = st[o + 9]!;
+    const depth = depths[sp]!;
     if (depth >= 20 || flatWithin(x0, y0, x1, y1, x2, y2, x3, y3, tolerance, tol2)) {
       out.push(t1);
-      return;
+      continue;
     }
     const x01 = x0 + (x1 - x0) * 0.5;
     const y01 = y0 + (y1 - y0) * 0.5;
@@ -222,12 +251,39 @@ export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
     const xm = x012 + (x123 - x012) * 0.5;
     const ym = y012 + (y123 - y012) * 0.5;
     const tm = (t0 + t1) / 2;
-    recurse(x0, y0, x01, y01, x012, y012, xm, ym, t0, tm, depth + 1);
-    recurse(xm, ym, x123, y123, x23, y23, x3, y3, tm, t1, depth + 1);
-  };
-  recurse(c[0].x, c[0].y, c[1].x, c[1].y, c[2].x, c[2].y, c[3].x, c[3].y, 0, 1, 0);
+    // the right half, then the left half on top of it
+    st[o] = xm;
+    st[o + 1] = ym;
+    st[o + 2] = x123;
+    st[o + 3] = y123;
+    st[o + 4] = x23;
+    st[o + 5] = y23;
+    st[o + 6] = x3;
+    st[o + 7] = y3;
+    st[o + 8] = tm;
+    st[o + 9] = t1;
+    depths[sp] = depth + 1;
+    sp++;
+    o = sp * 10;
+    st[o] = x0;
+    st[o + 1] = y0;
+    st[o + 2] = x01;
+    st[o + 3] = y01;
+    st[o + 4] = x012;
+    st[o + 5] = y012;
+    st[o + 6] = xm;
+    st[o + 7] = ym;
+    st[o + 8] = t0;
+    st[o + 9] = tm;
+    depths[sp] = depth + 1;
+    sp++;
+  }
   return out;
 }
+
+/** The parts waiting on cubicFlattenTimes' stack (10 numbers each; at most one per depth, plus one). */
+const FLATTEN_STACK = new Float64Array(10 * 22);
+const FLATTEN_DEPTHS = new Int32Array(22);
 
 /** cubicFlatness(c) <= tolerance, decided without Math.hypot unless the squares are too close to call. */
 function flatWithin(x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, tolerance: number, tol2: number): boolean {
@@ -356,9 +412,12 @@ const ROOT_RESIDUAL = 1e-9;
  * direction `direction`, sorted. Degenerate: a zero direction gives []; a cubic lying on the
  * line gives [] (no transversal crossing).
  */
+/** Scratch list of cubicLineIntersections' roots (emptied on each call; never handed out). */
+const LINE_ROOTS: number[] = [];
+
 export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
-  if (vecLength(direction) < POINT_EPSILON) return [];
   const dl = vecLength(direction);
+  if (dl < POINT_EPSILON) return [];
   const nx = -direction.y / dl;
   const ny = direction.x / dl;
   const ox = origin.x;
@@ -375,7 +434,8 @@ export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point
   const d = s0;
   // the roots in [0, 1] (within PARAM_EPSILON, clamped), sorted (insertion: at most five), then
   // without values within 10 PARAM_EPSILON of the one kept before
-  const roots: number[] = [];
+  const roots = LINE_ROOTS;
+  roots.length = 0;
   cubicRootsInto(a, b, cc, d, roots);
   let n = 0;
   for (let k = 0; k < roots.length; k++) {

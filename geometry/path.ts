@@ -948,26 +948,37 @@ export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCros
  * vertex before them (and, closed, of the first), as its filter drops them.
  */
 function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Float64Array; n: number } {
+  const segs = c.segments;
+  // each cubic's flattening, looked up once
+  const flats: (CubicFlattening | undefined)[] = new Array<CubicFlattening | undefined>(segs.length);
   let total = 1;
-  for (const s of c.segments) total += s.kind === 'line' ? 1 : cubicFlattening(s, tolerance).ts.length - 1;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (s.kind === 'line') total += 1;
+    else {
+      const f = cubicFlattening(s, tolerance);
+      flats[i] = f;
+      total += f.ts.length - 1;
+    }
+  }
   const xs = new Float64Array(total);
   const ys = new Float64Array(total);
   // raw vertices in order, as flattenContour lists them
   let m = 0;
-  const segs = c.segments;
   if (segs.length > 0) {
     xs[0] = segs[0]!.from.x;
     ys[0] = segs[0]!.from.y;
     m = 1;
   }
-  for (const s of segs) {
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
     if (s.kind === 'line') {
       xs[m] = s.to.x;
       ys[m] = s.to.y;
       m++;
       continue;
     }
-    const f = cubicFlattening(s, tolerance);
+    const f = flats[i]!;
     const fx = f.xs;
     const fy = f.ys;
     for (let k = 1; k < fx.length; k++) {
