@@ -8,11 +8,11 @@ import type { Pattern } from '../model.ts';
 import { pathTextDeferred } from '../path.ts';
 import { blendOpSchema, performBlend } from './blend.ts';
 import { AlterationError, type Caution, type OpResult } from './common.ts';
-import { girthOpSchema, performGirth } from './girth.ts';
+import { girthOpSchema, performGirthParsed } from './girth.ts';
 import { markLineOpSchema, performMarkLine } from './mark-line.ts';
 import { lengthenOpSchema, performLengthen, performRise, riseOpSchema } from './lengthen.ts';
 import { performSeamAllowance, seamAllowanceOpSchema } from './seam-allowance.ts';
-import { performSlashSpread, slashSpreadOpSchema } from './slash-spread.ts';
+import { performSlashSpreadParsed, slashSpreadOpSchema } from './slash-spread.ts';
 import { performShrinkage, shrinkageOpSchema } from './shrinkage.ts';
 
 export const alterationOpSchema = z.discriminatedUnion('op', [lengthenOpSchema, riseOpSchema, blendOpSchema, shrinkageOpSchema, seamAllowanceOpSchema, girthOpSchema, slashSpreadOpSchema, markLineOpSchema]);
@@ -38,9 +38,9 @@ function performParsed(pattern: Pattern, op: z.output<typeof alterationOpSchema>
     case 'shrinkage':
       return performShrinkage(pattern, op);
     case 'slash-spread':
-      return performSlashSpread(pattern, op);
+      return performSlashSpreadParsed(pattern, op);
     case 'girth':
-      return performGirth(pattern, op);
+      return performGirthParsed(pattern, op);
     case 'seam-allowance':
       return performSeamAllowance(pattern, op);
     case 'mark-line':

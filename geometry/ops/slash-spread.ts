@@ -155,7 +155,11 @@ function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRota
 }
 
 export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpResult {
-  const op = slashSpreadOpSchema.parse(input);
+  return performSlashSpreadParsed(pattern, slashSpreadOpSchema.parse(input));
+}
+
+/** performSlashSpread for an operation slashSpreadOpSchema has already parsed (applyOps parses each once). */
+export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof slashSpreadOpSchema>): OpResult {
   const target = pattern.pieces.find((p) => p.name === op.piece);
   if (!target) throw new AlterationError('missing-piece', `there is no piece named "${op.piece}"`);
   const radius = vecDistance(op.from, op.hinge);
