@@ -470,17 +470,25 @@ function fmt(v: number, decimals: number): string {
   // spacing there), so it is also the shortest decimal String() would print; below 1e-6 String()
   // would switch to exponents, which 6 decimals never reach.
   if (decimals <= 6 && Math.abs(n) < k * 1e6) {
-    const digits = String(Math.abs(n));
+    // the integer part and the decimals of |n| / k as integers (exact: |n| < 2^53, and the
+    // quotient, below 1e6, is at least 1/k away from the next integer unless it is one), the
+    // decimals without their trailing zeros, zero-padded on the left
+    const a = Math.abs(n);
     const sign = n < 0 ? '-' : '';
-    if (decimals === 0) return sign + digits;
-    const padded = digits.length > decimals ? digits : '0'.repeat(decimals + 1 - digits.length) + digits;
-    const cut = padded.length - decimals;
-    let end = padded.length;
-    while (end > cut && padded.charCodeAt(end - 1) === 48) end--;
-    return sign + padded.slice(0, cut) + (end > cut ? '.' + padded.slice(cut, end) : '');
+    const whole = Math.floor(a / k);
+    let part = a - whole * k;
+    if (part === 0) return sign + whole;
+    let places = decimals;
+    while (part % 10 === 0) {
+      part /= 10;
+      places--;
+    }
+    const text = String(part);
+    return sign + whole + '.' + ZEROS[places - text.length]! + text;
   }
   return String(n / k);
 }
+const ZEROS = ['', '0', '00', '000', '0000', '00000', '000000'];
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
