@@ -262,7 +262,7 @@ function readPath(d: string): Path {
  * from a 1e-9 relative band the two decide alike (non-finite values and underflow fall into
  * the band or decide alike too).
  */
-function hypotAbove(dx: number, dy: number, limit: number): boolean {
+export function hypotAbove(dx: number, dy: number, limit: number): boolean {
   const d2 = dx * dx + dy * dy;
   const l2 = limit * limit;
   if (d2 > l2 * (1 + 1e-9)) return true;
@@ -818,8 +818,8 @@ function flattenContour(c: Contour, tolerance: number): FlatPoint[] {
 interface CubicFlattening {
   readonly tolerance: number;
   readonly ts: readonly number[];
-  readonly xs: Float64Array;
-  readonly ys: Float64Array;
+  readonly xs: readonly number[];
+  readonly ys: readonly number[];
   points: Point[] | undefined;
 }
 
@@ -844,16 +844,15 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
   for (const f of kept) if (f.tolerance === tolerance) return f;
   const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
   const n = ts.length;
-  const xs = new Float64Array(n);
-  const ys = new Float64Array(n);
+  // plain arrays: a small typed array costs several times as much to make
+  const xs: number[] = [s.from.x];
+  const ys: number[] = [s.from.y];
   const { from, c1, c2, to } = s;
-  xs[0] = from.x;
-  ys[0] = from.y;
   for (let k = 1; k < n; k++) {
     const t = ts[k]!;
     if (t === 1) {
-      xs[k] = to.x;
-      ys[k] = to.y;
+      xs.push(to.x);
+      ys.push(to.y);
       continue;
     }
     // cubicPoint's arithmetic, inline
@@ -862,8 +861,8 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
     const b = 3 * mt * mt * t;
     const d = 3 * mt * t * t;
     const e = t * t * t;
-    xs[k] = a * from.x + b * c1.x + d * c2.x + e * to.x;
-    ys[k] = a * from.y + b * c1.y + d * c2.y + e * to.y;
+    xs.push(a * from.x + b * c1.x + d * c2.x + e * to.x);
+    ys.push(a * from.y + b * c1.y + d * c2.y + e * to.y);
   }
   const f: CubicFlattening = { tolerance, ts, xs, ys, points: undefined };
   if (kept.length >= CUBIC_FLATTEN_KEEP) kept.shift();

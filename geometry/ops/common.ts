@@ -190,7 +190,7 @@ function roundPoint(p: Point): Point {
  * the integer it rounds to, that integer is n. Elsewhere (near a half, huge or non-finite
  * values) toFixed itself decides. A zero keeps toFixed's sign: "-0.000000" only for v < 0.
  */
-function round6(v: number): number {
+export function round6(v: number): number {
   const s = v * 1e6;
   const n = Math.round(s);
   if (!(Math.abs(v) < 1e9 && Math.abs(s - n) < 0.4)) return Number(v.toFixed(6));
