@@ -337,24 +337,29 @@ export function solveQuadratic(a: number, b: number, c: number): number[] {
 
 /** Real roots of a·x³ + b·x² + c·x + d = 0 (falls back to quadratic when a ≈ 0). */
 export function solveCubic(a: number, b: number, c: number, d: number): number[] {
+  const n = cubicRootsInto(a, b, c, d, ROOTS);
   const out: number[] = [];
-  cubicRootsInto(a, b, c, d, out);
+  for (let k = 0; k < n; k++) out.push(ROOTS[k]!);
   return out;
 }
+
+/** Scratch list of cubicRootsInto's roots (at most 5; read right after each call, never handed out). */
+const ROOTS = new Float64Array(5);
 
 /** Candidate roots of cubicRootsInto before polishing (at most 3 + 2). */
 const CANDIDATES = new Float64Array(5);
 
 /**
- * solveCubic's roots appended to `out` (which must start empty), in solveCubic's order: the
- * same arithmetic, without the arrays and objects of the candidates.
+ * solveCubic's roots written to `out` from index 0, in solveCubic's order; returns how many.
+ * The same arithmetic, without the arrays and objects of the candidates.
  */
-function cubicRootsInto(a: number, b: number, c: number, d: number, out: number[]): void {
+function cubicRootsInto(a: number, b: number, c: number, d: number, out: Float64Array): number {
   const scale = Math.max(Math.abs(a), Math.abs(b), Math.abs(c), Math.abs(d));
-  if (scale === 0) return;
+  if (scale === 0) return 0;
   if (Math.abs(a) < 1e-12 * scale) {
-    for (const r of solveQuadratic(b, c, d)) out.push(r);
-    return;
+    const q = solveQuadratic(b, c, d);
+    for (let k = 0; k < q.length; k++) out[k] = q[k]!;
+    return q.length;
   }
   const A = b / a;
   const B = c / a;
@@ -379,11 +384,15 @@ function cubicRootsInto(a: number, b: number, c: number, d: number, out: number[
   // A leading coefficient that is small beside the others (a cubic that is nearly a parabola)
   // makes A, B, C huge and the closed form loses the roots near 0; the parabola's roots, polished
   // on the cubic below, find them.
-  if (Math.abs(a) < 1e-6 * scale) for (const r of solveQuadratic(b, c, d)) roots[count++] = r;
+  if (Math.abs(a) < 1e-6 * scale) {
+    const q = solveQuadratic(b, c, d);
+    for (let k = 0; k < q.length; k++) roots[count++] = q[k]!;
+  }
   // Newton polish: the closed form loses accuracy at multiple roots (a triple root is only
   // found to ~1e-5·scale^(1/3)); Newton converges there too, linearly, so iterate while |f| falls.
   // A candidate that does not polish into a root (its residual stays above ROOT_RESIDUAL of the
   // coefficients' scale) is dropped, and repeats are merged.
+  let n = 0;
   for (let k = 0; k < count; k++) {
     let x = roots[k]!;
     let fx = ((a * x + b) * x + c) * x + d;
@@ -399,9 +408,10 @@ function cubicRootsInto(a: number, b: number, c: number, d: number, out: number[
     const size = Math.max(1, Math.abs(x));
     if (!(Math.abs(fx) <= ROOT_RESIDUAL * scale * size * size * size)) continue;
     let repeat = false;
-    for (let j = 0; j < out.length && !repeat; j++) repeat = Math.abs(out[j]! - x) <= 1e-12 * size;
-    if (!repeat) out.push(x);
+    for (let j = 0; j < n && !repeat; j++) repeat = Math.abs(out[j]! - x) <= 1e-12 * size;
+    if (!repeat) out[n++] = x;
   }
+  return n;
 }
 
 /** Relative residual below which a polished cubic root is accepted (see solveCubic). */
@@ -412,20 +422,22 @@ const ROOT_RESIDUAL = 1e-9;
  * direction `direction`, sorted. Degenerate: a zero direction gives []; a cubic lying on the
  * line gives [] (no transversal crossing).
  */
-/** Scratch list of cubicLineIntersections' roots (emptied on each call; never handed out). */
-const LINE_ROOTS: number[] = [];
-
 export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
+  return cubicPointsLineIntersections(c[0], c[1], c[2], c[3], origin, direction);
+}
+
+/** cubicLineIntersections of the cubic with control points p0…p3 (no tuple needed). */
+export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3: Point, origin: Point, direction: Point): number[] {
   const dl = vecLength(direction);
   if (dl < POINT_EPSILON) return [];
   const nx = -direction.y / dl;
   const ny = direction.x / dl;
   const ox = origin.x;
   const oy = origin.y;
-  const s0 = nx * (c[0].x - ox) + ny * (c[0].y - oy);
-  const s1 = nx * (c[1].x - ox) + ny * (c[1].y - oy);
-  const s2 = nx * (c[2].x - ox) + ny * (c[2].y - oy);
-  const s3 = nx * (c[3].x - ox) + ny * (c[3].y - oy);
+  const s0 = nx * (p0.x - ox) + ny * (p0.y - oy);
+  const s1 = nx * (p1.x - ox) + ny * (p1.y - oy);
+  const s2 = nx * (p2.x - ox) + ny * (p2.y - oy);
+  const s3 = nx * (p3.x - ox) + ny * (p3.y - oy);
   if (Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3)) < POINT_EPSILON) return [];
   // Bernstein → power basis.
   const a = -s0 + 3 * s1 - 3 * s2 + s3;
@@ -434,11 +446,10 @@ export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point
   const d = s0;
   // the roots in [0, 1] (within PARAM_EPSILON, clamped), sorted (insertion: at most five), then
   // without values within 10 PARAM_EPSILON of the one kept before
-  const roots = LINE_ROOTS;
-  roots.length = 0;
-  cubicRootsInto(a, b, cc, d, roots);
+  const roots = ROOTS;
+  const count = cubicRootsInto(a, b, cc, d, roots);
   let n = 0;
-  for (let k = 0; k < roots.length; k++) {
+  for (let k = 0; k < count; k++) {
     const t = roots[k]!;
     if (!(t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON)) continue;
     const v = Math.min(1, Math.max(0, t));

@@ -11,9 +11,9 @@ import {
   cubicDerivative,
   cubicFlattenTimes,
   cubicLength,
-  cubicLineIntersections,
   cubicNearestTime,
   cubicPoint,
+  cubicPointsLineIntersections,
   cubicSlice,
   cubicSplit,
   cubicTangent,
@@ -67,7 +67,14 @@ export function segmentCubic(s: Segment): Cubic {
 }
 
 export function segmentPoint(s: Segment, t: number): Point {
-  return s.kind === 'line' ? vecLerp(s.from, s.to, t) : cubicPoint(segmentCubic(s), t);
+  if (s.kind === 'line') return vecLerp(s.from, s.to, t);
+  // cubicPoint's arithmetic, without the tuple
+  const mt = 1 - t;
+  const a = mt * mt * mt;
+  const b = 3 * mt * mt * t;
+  const d = 3 * mt * t * t;
+  const e = t * t * t;
+  return { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
 }
 
 /** Unit tangent at t (see cubicTangent for degenerate cases). */
@@ -100,6 +107,7 @@ export function segmentSlice(s: Segment, t0: number, t1: number): Segment {
  * other, of 0 or of 1 are ignored). Returns the pieces in order.
  */
 export function segmentSplitAt(s: Segment, ts: readonly number[]): Segment[] {
+  if (ts.length === 0) return [s];
   const cuts = [...ts].filter((t) => t > PARAM_EPSILON && t < 1 - PARAM_EPSILON).sort((a, b) => a - b);
   const out: Segment[] = [];
   let rest = s;
@@ -141,7 +149,7 @@ export function segmentLineIntersections(s: Segment, origin: Point, direction: P
     const t = vecCross(vecSub(origin, s.from), direction) / den;
     return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
   }
-  return cubicLineIntersections(segmentCubic(s), origin, direction);
+  return cubicPointsLineIntersections(s.from, s.c1, s.c2, s.to, origin, direction);
 }
 
 /** Parameters of the flattening polyline (lines give [0, 1]). */
