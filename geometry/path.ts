@@ -294,6 +294,21 @@ class PathBuilder {
     this.start = this.current = { x, y };
   }
 
+  /**
+   * The segment `s` itself where line()/curve() would build one with its very numbers (the
+   * current point is s.from by value, and s's other numbers are those passed): the same
+   * reading rule, without a copy.
+   */
+  same(s: Segment): void {
+    const from = this.current!;
+    const to = s.to;
+    if (s.kind === 'line') {
+      if (hypotAbove(from.x - to.x, from.y - to.y, POINT_EPSILON)) this.segments.push(s);
+    } else if (hypotAbove(from.x - to.x, from.y - to.y, POINT_EPSILON) || hypotAbove(from.x - s.c1.x, from.y - s.c1.y, POINT_EPSILON) || hypotAbove(from.x - s.c2.x, from.y - s.c2.y, POINT_EPSILON))
+      this.segments.push(s);
+    this.current = to;
+  }
+
   line(x: number, y: number): void {
     const from = this.current!;
     const to = { x, y };
@@ -333,8 +348,9 @@ class PathBuilder {
       const gap = vecDistance(last.to, start);
       if (this.closed && gap > POINT_EPSILON) segments.push(lineSegment(last.to, start));
       else if (this.closed || gap <= CLOSE_GAP) {
-        // snap the end exactly onto the start
-        segments[segments.length - 1] = segmentMapPoints(last, (p) => (p === last.to ? start : p));
+        // snap the end exactly onto the start (only the end: a segment taken as it is by same()
+        // may share one point object between its end and a control point)
+        segments[segments.length - 1] = last.kind === 'line' ? lineSegment(last.from, start) : { kind: 'cubic', from: last.from, c1: last.c1, c2: last.c2, to: start };
         this.closed = true;
       }
       this.contours.push({ segments, closed: this.closed });
@@ -606,11 +622,28 @@ function readBackOf(path: Path, decimals: number): Path {
     if (segs.length === 0) continue;
     const first = segs[0]!;
     b.move(r(first.from.x), r(first.from.y));
+    const same = Object.is;
     for (let i = 0; i < segs.length; i++) {
       const s = segs[i]!;
       if (c.closed && i === segs.length - 1 && s.kind === 'line') continue; // Z draws it
-      if (s.kind === 'line') b.line(r(s.to.x), r(s.to.y));
-      else b.curve(r(s.c1.x), r(s.c1.y), r(s.c2.x), r(s.c2.y), r(s.to.x), r(s.to.y));
+      // a segment whose numbers read back as they are (one an operation left alone), starting
+      // at the current point by value, is taken itself
+      const keep = same(b.current!.x, s.from.x) && same(b.current!.y, s.from.y);
+      if (s.kind === 'line') {
+        const x = r(s.to.x);
+        const y = r(s.to.y);
+        if (keep && same(x, s.to.x) && same(y, s.to.y)) b.same(s);
+        else b.line(x, y);
+      } else {
+        const x1 = r(s.c1.x);
+        const y1 = r(s.c1.y);
+        const x2 = r(s.c2.x);
+        const y2 = r(s.c2.y);
+        const x = r(s.to.x);
+        const y = r(s.to.y);
+        if (keep && same(x1, s.c1.x) && same(y1, s.c1.y) && same(x2, s.c2.x) && same(y2, s.c2.y) && same(x, s.to.x) && same(y, s.to.y)) b.same(s);
+        else b.curve(x1, y1, x2, y2, x, y);
+      }
     }
     if (c.closed) b.close();
   }
@@ -852,15 +885,17 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
   for (const f of kept) if (f.tolerance === tolerance) return f;
   const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
   const n = ts.length;
-  // plain arrays: a small typed array costs several times as much to make
-  const xs: number[] = [s.from.x];
-  const ys: number[] = [s.from.y];
+  // plain arrays of the final size: a small typed array costs several times as much to make
+  const xs = new Array<number>(n);
+  const ys = new Array<number>(n);
   const { from, c1, c2, to } = s;
+  xs[0] = from.x;
+  ys[0] = from.y;
   for (let k = 1; k < n; k++) {
     const t = ts[k]!;
     if (t === 1) {
-      xs.push(to.x);
-      ys.push(to.y);
+      xs[k] = to.x;
+      ys[k] = to.y;
       continue;
     }
     // cubicPoint's arithmetic, inline
@@ -869,8 +904,8 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
     const b = 3 * mt * mt * t;
     const d = 3 * mt * t * t;
     const e = t * t * t;
-    xs.push(a * from.x + b * c1.x + d * c2.x + e * to.x);
-    ys.push(a * from.y + b * c1.y + d * c2.y + e * to.y);
+    xs[k] = a * from.x + b * c1.x + d * c2.x + e * to.x;
+    ys[k] = a * from.y + b * c1.y + d * c2.y + e * to.y;
   }
   const f: CubicFlattening = { tolerance, ts, xs, ys, points: undefined };
   if (kept.length >= CUBIC_FLATTEN_KEEP) kept.shift();
