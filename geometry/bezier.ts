@@ -201,13 +201,42 @@ export function cubicIsStraight(c: Cubic, tolerance = POINT_EPSILON): boolean {
 export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
   // Scalar form of: split at ½ by de Casteljau until cubicFlatness(part) <= tolerance (or
   // depth 20). Same arithmetic as cubicSplit/cubicFlatness, without allocating a point per
-  // step, so the parameters are exactly those of the plain recursion.
+  // step, so the parameters are exactly those of the plain recursion. The recursion runs on an
+  // explicit stack of parts (the right half pushed under the left one), so the leaves come in
+  // the same order, left to right.
   const out = [0];
   const tol2 = tolerance * tolerance;
-  const recurse = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, t0: number, t1: number, depth: number): void => {
+  const st = FLATTEN_STACK;
+  const depths = FLATTEN_DEPTHS;
+  st[0] = c[0].x;
+  st[1] = c[0].y;
+  st[2] = c[1].x;
+  st[3] = c[1].y;
+  st[4] = c[2].x;
+  st[5] = c[2].y;
+  st[6] = c[3].x;
+  st[7] = c[3].y;
+  st[8] = 0;
+  st[9] = 1;
+  depths[0] = 0;
+  let sp = 1;
+  while (sp > 0) {
+    sp--;
+    let o = sp * 10;
+    const x0 = st[o]!;
+    const y0 = st[o + 1]!;
+    const x1 = st[o + 2]!;
+    const y1 = st[o + 3]!;
+    const x2 = st[o + 4]!;
+    const y2 = st[o + 5]!;
+    const x3 = st[o + 6]!;
+    const y3 = st[o + 7]!;
+    const t0 = st[o + 8]!;
+    const t1 = st[o + 9]!;
+    const depth = depths[sp]!;
     if (depth >= 20 || flatWithin(x0, y0, x1, y1, x2, y2, x3, y3, tolerance, tol2)) {
       out.push(t1);
-      return;
+      continue;
     }
     const x01 = x0 + (x1 - x0) * 0.5;
     const y01 = y0 + (y1 - y0) * 0.5;
@@ -222,12 +251,39 @@ export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
     const xm = x012 + (x123 - x012) * 0.5;
     const ym = y012 + (y123 - y012) * 0.5;
     const tm = (t0 + t1) / 2;
-    recurse(x0, y0, x01, y01, x012, y012, xm, ym, t0, tm, depth + 1);
-    recurse(xm, ym, x123, y123, x23, y23, x3, y3, tm, t1, depth + 1);
-  };
-  recurse(c[0].x, c[0].y, c[1].x, c[1].y, c[2].x, c[2].y, c[3].x, c[3].y, 0, 1, 0);
+    // the right half, then the left half on top of it
+    st[o] = xm;
+    st[o + 1] = ym;
+    st[o + 2] = x123;
+    st[o + 3] = y123;
+    st[o + 4] = x23;
+    st[o + 5] = y23;
+    st[o + 6] = x3;
+    st[o + 7] = y3;
+    st[o + 8] = tm;
+    st[o + 9] = t1;
+    depths[sp] = depth + 1;
+    sp++;
+    o = sp * 10;
+    st[o] = x0;
+    st[o + 1] = y0;
+    st[o + 2] = x01;
+    st[o + 3] = y01;
+    st[o + 4] = x012;
+    st[o + 5] = y012;
+    st[o + 6] = xm;
+    st[o + 7] = ym;
+    st[o + 8] = t0;
+    st[o + 9] = tm;
+    depths[sp] = depth + 1;
+    sp++;
+  }
   return out;
 }
+
+/** The parts waiting on cubicFlattenTimes' stack (10 numbers each; at most one per depth, plus one). */
+const FLATTEN_STACK = new Float64Array(10 * 22);
+const FLATTEN_DEPTHS = new Int32Array(22);
 
 /** cubicFlatness(c) <= tolerance, decided without Math.hypot unless the squares are too close to call. */
 function flatWithin(x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, tolerance: number, tol2: number): boolean {
@@ -281,33 +337,64 @@ export function solveQuadratic(a: number, b: number, c: number): number[] {
 
 /** Real roots of a·x³ + b·x² + c·x + d = 0 (falls back to quadratic when a ≈ 0). */
 export function solveCubic(a: number, b: number, c: number, d: number): number[] {
+  const n = cubicRootsInto(a, b, c, d, ROOTS);
+  const out: number[] = [];
+  for (let k = 0; k < n; k++) out.push(ROOTS[k]!);
+  return out;
+}
+
+/** Scratch list of cubicRootsInto's roots (at most 5; read right after each call, never handed out). */
+const ROOTS = new Float64Array(5);
+
+/** Candidate roots of cubicRootsInto before polishing (at most 3 + 2). */
+const CANDIDATES = new Float64Array(5);
+
+/**
+ * solveCubic's roots written to `out` from index 0, in solveCubic's order; returns how many.
+ * The same arithmetic, without the arrays and objects of the candidates.
+ */
+function cubicRootsInto(a: number, b: number, c: number, d: number, out: Float64Array): number {
   const scale = Math.max(Math.abs(a), Math.abs(b), Math.abs(c), Math.abs(d));
-  if (scale === 0) return [];
-  if (Math.abs(a) < 1e-12 * scale) return solveQuadratic(b, c, d);
+  if (scale === 0) return 0;
+  if (Math.abs(a) < 1e-12 * scale) {
+    const q = solveQuadratic(b, c, d);
+    for (let k = 0; k < q.length; k++) out[k] = q[k]!;
+    return q.length;
+  }
   const A = b / a;
   const B = c / a;
   const C = d / a;
   const Q = (A * A - 3 * B) / 9;
   const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
-  const roots: number[] = [];
+  const roots = CANDIDATES;
+  let count: number;
   if (R * R < Q * Q * Q) {
     const th = Math.acos(Math.max(-1, Math.min(1, R / Math.sqrt(Q * Q * Q))));
     const m = -2 * Math.sqrt(Q);
-    roots.push(m * Math.cos(th / 3) - A / 3, m * Math.cos((th + 2 * Math.PI) / 3) - A / 3, m * Math.cos((th - 2 * Math.PI) / 3) - A / 3);
+    roots[0] = m * Math.cos(th / 3) - A / 3;
+    roots[1] = m * Math.cos((th + 2 * Math.PI) / 3) - A / 3;
+    roots[2] = m * Math.cos((th - 2 * Math.PI) / 3) - A / 3;
+    count = 3;
   } else {
     const s = -Math.sign(R) * Math.cbrt(Math.abs(R) + Math.sqrt(R * R - Q * Q * Q));
     const u = s === 0 ? 0 : Q / s;
-    roots.push(s + u - A / 3);
+    roots[0] = s + u - A / 3;
+    count = 1;
   }
   // A leading coefficient that is small beside the others (a cubic that is nearly a parabola)
   // makes A, B, C huge and the closed form loses the roots near 0; the parabola's roots, polished
   // on the cubic below, find them.
-  if (Math.abs(a) < 1e-6 * scale) roots.push(...solveQuadratic(b, c, d));
+  if (Math.abs(a) < 1e-6 * scale) {
+    const q = solveQuadratic(b, c, d);
+    for (let k = 0; k < q.length; k++) roots[count++] = q[k]!;
+  }
   // Newton polish: the closed form loses accuracy at multiple roots (a triple root is only
   // found to ~1e-5·scale^(1/3)); Newton converges there too, linearly, so iterate while |f| falls.
   // A candidate that does not polish into a root (its residual stays above ROOT_RESIDUAL of the
   // coefficients' scale) is dropped, and repeats are merged.
-  const polished = roots.map((x) => {
+  let n = 0;
+  for (let k = 0; k < count; k++) {
+    let x = roots[k]!;
     let fx = ((a * x + b) * x + c) * x + d;
     for (let i = 0; i < 60 && fx !== 0; i++) {
       const df = (3 * a * x + 2 * b) * x + c;
@@ -318,15 +405,13 @@ export function solveCubic(a: number, b: number, c: number, d: number): number[]
       x = nx;
       fx = nf;
     }
-    return { x, fx };
-  });
-  const out: number[] = [];
-  for (const { x, fx } of polished) {
     const size = Math.max(1, Math.abs(x));
     if (!(Math.abs(fx) <= ROOT_RESIDUAL * scale * size * size * size)) continue;
-    if (!out.some((y) => Math.abs(y - x) <= 1e-12 * size)) out.push(x);
+    let repeat = false;
+    for (let j = 0; j < n && !repeat; j++) repeat = Math.abs(out[j]! - x) <= 1e-12 * size;
+    if (!repeat) out[n++] = x;
   }
-  return out;
+  return n;
 }
 
 /** Relative residual below which a polished cubic root is accepted (see solveCubic). */
@@ -338,23 +423,49 @@ const ROOT_RESIDUAL = 1e-9;
  * line gives [] (no transversal crossing).
  */
 export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
-  if (vecLength(direction) < POINT_EPSILON) return [];
+  return cubicPointsLineIntersections(c[0], c[1], c[2], c[3], origin, direction);
+}
+
+/** cubicLineIntersections of the cubic with control points p0…p3 (no tuple needed). */
+export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3: Point, origin: Point, direction: Point): number[] {
   const dl = vecLength(direction);
-  const n = { x: -direction.y / dl, y: direction.x / dl };
-  const s = c.map((p) => n.x * (p.x - origin.x) + n.y * (p.y - origin.y));
-  const [s0, s1, s2, s3] = s as [number, number, number, number];
+  if (dl < POINT_EPSILON) return [];
+  const nx = -direction.y / dl;
+  const ny = direction.x / dl;
+  const ox = origin.x;
+  const oy = origin.y;
+  const s0 = nx * (p0.x - ox) + ny * (p0.y - oy);
+  const s1 = nx * (p1.x - ox) + ny * (p1.y - oy);
+  const s2 = nx * (p2.x - ox) + ny * (p2.y - oy);
+  const s3 = nx * (p3.x - ox) + ny * (p3.y - oy);
   if (Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3)) < POINT_EPSILON) return [];
   // Bernstein → power basis.
   const a = -s0 + 3 * s1 - 3 * s2 + s3;
   const b = 3 * s0 - 6 * s1 + 3 * s2;
   const cc = -3 * s0 + 3 * s1;
   const d = s0;
-  const roots = solveCubic(a, b, cc, d)
-    .filter((t) => t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON)
-    .map((t) => Math.min(1, Math.max(0, t)))
-    .sort((x, y) => x - y);
+  // the roots in [0, 1] (within PARAM_EPSILON, clamped), sorted (insertion: at most five), then
+  // without values within 10 PARAM_EPSILON of the one kept before
+  const roots = ROOTS;
+  const count = cubicRootsInto(a, b, cc, d, roots);
+  let n = 0;
+  for (let k = 0; k < count; k++) {
+    const t = roots[k]!;
+    if (!(t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON)) continue;
+    const v = Math.min(1, Math.max(0, t));
+    let j = n - 1;
+    while (j >= 0 && roots[j]! > v) {
+      roots[j + 1] = roots[j]!;
+      j--;
+    }
+    roots[j + 1] = v;
+    n++;
+  }
   const unique: number[] = [];
-  for (const t of roots) if (unique.length === 0 || t - unique[unique.length - 1]! > PARAM_EPSILON * 10) unique.push(t);
+  for (let k = 0; k < n; k++) {
+    const t = roots[k]!;
+    if (unique.length === 0 || t - unique[unique.length - 1]! > PARAM_EPSILON * 10) unique.push(t);
+  }
   return unique;
 }
 

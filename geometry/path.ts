@@ -11,9 +11,9 @@ import {
   cubicDerivative,
   cubicFlattenTimes,
   cubicLength,
-  cubicLineIntersections,
   cubicNearestTime,
   cubicPoint,
+  cubicPointsLineIntersections,
   cubicSlice,
   cubicSplit,
   cubicTangent,
@@ -67,7 +67,14 @@ export function segmentCubic(s: Segment): Cubic {
 }
 
 export function segmentPoint(s: Segment, t: number): Point {
-  return s.kind === 'line' ? vecLerp(s.from, s.to, t) : cubicPoint(segmentCubic(s), t);
+  if (s.kind === 'line') return vecLerp(s.from, s.to, t);
+  // cubicPoint's arithmetic, without the tuple
+  const mt = 1 - t;
+  const a = mt * mt * mt;
+  const b = 3 * mt * mt * t;
+  const d = 3 * mt * t * t;
+  const e = t * t * t;
+  return { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
 }
 
 /** Unit tangent at t (see cubicTangent for degenerate cases). */
@@ -100,6 +107,7 @@ export function segmentSlice(s: Segment, t0: number, t1: number): Segment {
  * other, of 0 or of 1 are ignored). Returns the pieces in order.
  */
 export function segmentSplitAt(s: Segment, ts: readonly number[]): Segment[] {
+  if (ts.length === 0) return [s];
   const cuts = [...ts].filter((t) => t > PARAM_EPSILON && t < 1 - PARAM_EPSILON).sort((a, b) => a - b);
   const out: Segment[] = [];
   let rest = s;
@@ -141,7 +149,7 @@ export function segmentLineIntersections(s: Segment, origin: Point, direction: P
     const t = vecCross(vecSub(origin, s.from), direction) / den;
     return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
   }
-  return cubicLineIntersections(segmentCubic(s), origin, direction);
+  return cubicPointsLineIntersections(s.from, s.c1, s.c2, s.to, origin, direction);
 }
 
 /** Parameters of the flattening polyline (lines give [0, 1]). */
@@ -256,74 +264,138 @@ function readPath(d: string): Path {
   return buildPath(fastCommands(d) ?? libraryCommands(d));
 }
 
-/** The contours of a list of absolute commands (the second half of reading path data). */
-function buildPath(commands: readonly RawCommand[]): Path {
-  const contours: Contour[] = [];
-  let segments: Segment[] = [];
-  let start: Point | null = null;
-  let current: Point | null = null;
-  let closed = false;
-  const finish = (): void => {
+/**
+ * Math.hypot(dx, dy) > limit (limit ≥ 0), decided on the squares unless they are too close to
+ * call, then by Math.hypot itself: the squared sum is within a few ulps of hypot², so away
+ * from a 1e-9 relative band the two decide alike (non-finite values and underflow fall into
+ * the band or decide alike too).
+ */
+export function hypotAbove(dx: number, dy: number, limit: number): boolean {
+  const d2 = dx * dx + dy * dy;
+  const l2 = limit * limit;
+  if (d2 > l2 * (1 + 1e-9)) return true;
+  if (d2 < l2 * (1 - 1e-9)) return false;
+  return Math.hypot(dx, dy) > limit;
+}
+
+/**
+ * Builds contours from absolute commands by the reading rules of pathFromSvg (the second half
+ * of reading path data; see buildPath). Shared by buildPath and readBackOf.
+ */
+class PathBuilder {
+  readonly contours: Contour[] = [];
+  private segments: Segment[] = [];
+  private start: Point | null = null;
+  current: Point | null = null;
+  private closed = false;
+
+  move(x: number, y: number): void {
+    this.finish();
+    this.start = this.current = { x, y };
+  }
+
+  /**
+   * The segment `s` itself where line()/curve() would build one with its very numbers (the
+   * current point is s.from by value, and s's other numbers are those passed): the same
+   * reading rule, without a copy.
+   */
+  same(s: Segment): void {
+    const from = this.current!;
+    const to = s.to;
+    if (s.kind === 'line') {
+      if (hypotAbove(from.x - to.x, from.y - to.y, POINT_EPSILON)) this.segments.push(s);
+    } else if (hypotAbove(from.x - to.x, from.y - to.y, POINT_EPSILON) || hypotAbove(from.x - s.c1.x, from.y - s.c1.y, POINT_EPSILON) || hypotAbove(from.x - s.c2.x, from.y - s.c2.y, POINT_EPSILON))
+      this.segments.push(s);
+    this.current = to;
+  }
+
+  line(x: number, y: number): void {
+    const from = this.current!;
+    const to = { x, y };
+    // vecDistance(from, to) > POINT_EPSILON
+    if (hypotAbove(from.x - x, from.y - y, POINT_EPSILON)) this.segments.push(lineSegment(from, to));
+    this.current = to;
+  }
+
+  curve(x1: number, y1: number, x2: number, y2: number, x: number, y: number): void {
+    const from = this.current!;
+    const c1 = { x: x1, y: y1 };
+    const c2 = { x: x2, y: y2 };
+    const to = { x, y };
+    if (hypotAbove(from.x - x, from.y - y, POINT_EPSILON) || hypotAbove(from.x - x1, from.y - y1, POINT_EPSILON) || hypotAbove(from.x - x2, from.y - y2, POINT_EPSILON))
+      this.segments.push({ kind: 'cubic', from, c1, c2, to });
+    this.current = to;
+  }
+
+  /** A segment from the current point, taken as it is (quadratics and arcs), ending at `to`. */
+  push(s: Segment): void {
+    this.segments.push(s);
+  }
+
+  close(): void {
+    if (this.start) {
+      this.closed = true;
+      this.finish();
+      this.current = this.start;
+    }
+  }
+
+  finish(): void {
+    const segments = this.segments;
+    const start = this.start;
     if (segments.length > 0 && start) {
       const last = segments[segments.length - 1]!;
       const gap = vecDistance(last.to, start);
-      if (closed && gap > POINT_EPSILON) segments.push(lineSegment(last.to, start));
-      else if (closed || gap <= CLOSE_GAP) {
-        // snap the end exactly onto the start
-        segments[segments.length - 1] = segmentMapPoints(last, (p) => (p === last.to ? start! : p));
-        closed = true;
+      if (this.closed && gap > POINT_EPSILON) segments.push(lineSegment(last.to, start));
+      else if (this.closed || gap <= CLOSE_GAP) {
+        // snap the end exactly onto the start (only the end: a segment taken as it is by same()
+        // may share one point object between its end and a control point)
+        segments[segments.length - 1] = last.kind === 'line' ? lineSegment(last.from, start) : { kind: 'cubic', from: last.from, c1: last.c1, c2: last.c2, to: start };
+        this.closed = true;
       }
-      contours.push({ segments, closed });
+      this.contours.push({ segments, closed: this.closed });
     }
-    segments = [];
-    closed = false;
-  };
-  for (const { c, v } of commands) {
-    for (const x of v) if (!Number.isFinite(x)) throw new PathDataError('path data contains a number that is not finite');
-    if (c !== 'M' && c !== 'Z' && !current) throw new PathDataError('path data must start with M');
+    this.segments = [];
+    this.closed = false;
+  }
+}
+
+/** The contours of a list of absolute commands (the second half of reading path data). */
+function buildPath(commands: readonly RawCommand[]): Path {
+  const b = new PathBuilder();
+  for (let k = 0; k < commands.length; k++) {
+    const { c, v } = commands[k]!;
+    for (let i = 0; i < v.length; i++) if (!Number.isFinite(v[i]!)) throw new PathDataError('path data contains a number that is not finite');
+    if (c !== 'M' && c !== 'Z' && !b.current) throw new PathDataError('path data must start with M');
     switch (c) {
       case 'M':
-        finish();
-        start = current = { x: v[0]!, y: v[1]! };
+        b.move(v[0]!, v[1]!);
         break;
       case 'Z':
-        if (start) {
-          closed = true;
-          finish();
-          current = start;
-        }
+        b.close();
         break;
-      case 'L': {
-        const to = { x: v[0]!, y: v[1]! };
-        if (vecDistance(current!, to) > POINT_EPSILON) segments.push(lineSegment(current!, to));
-        current = to;
+      case 'L':
+        b.line(v[0]!, v[1]!);
         break;
-      }
-      case 'C': {
-        const c1 = { x: v[0]!, y: v[1]! };
-        const c2 = { x: v[2]!, y: v[3]! };
-        const to = { x: v[4]!, y: v[5]! };
-        if (vecDistance(current!, to) > POINT_EPSILON || vecDistance(current!, c1) > POINT_EPSILON || vecDistance(current!, c2) > POINT_EPSILON)
-          segments.push({ kind: 'cubic', from: current!, c1, c2, to });
-        current = to;
+      case 'C':
+        b.curve(v[0]!, v[1]!, v[2]!, v[3]!, v[4]!, v[5]!);
         break;
-      }
       case 'Q': {
         const to = { x: v[2]!, y: v[3]! };
-        segments.push(cubicSegment(quadraticToCubic([current!, { x: v[0]!, y: v[1]! }, to])));
-        current = to;
+        b.push(cubicSegment(quadraticToCubic([b.current!, { x: v[0]!, y: v[1]! }, to])));
+        b.current = to;
         break;
       }
       case 'A': {
         const to = { x: v[5]!, y: v[6]! };
-        for (const cu of arcToCubics(current!, v[0]!, v[1]!, v[2]!, v[3] === 1, v[4] === 1, to)) segments.push(cubicSegment(cu));
-        current = to;
+        for (const cu of arcToCubics(b.current!, v[0]!, v[1]!, v[2]!, v[3] === 1, v[4] === 1, to)) b.push(cubicSegment(cu));
+        b.current = to;
         break;
       }
     }
   }
-  finish();
-  return contours;
+  b.finish();
+  return b.contours;
 }
 
 interface RawCommand {
@@ -422,23 +494,31 @@ function fmt(v: number, decimals: number): string {
   // spacing there), so it is also the shortest decimal String() would print; below 1e-6 String()
   // would switch to exponents, which 6 decimals never reach.
   if (decimals <= 6 && Math.abs(n) < k * 1e6) {
-    const digits = String(Math.abs(n));
+    // the integer part and the decimals of |n| / k as integers (exact: |n| < 2^53, and the
+    // quotient, below 1e6, is at least 1/k away from the next integer unless it is one), the
+    // decimals without their trailing zeros, zero-padded on the left
+    const a = Math.abs(n);
     const sign = n < 0 ? '-' : '';
-    if (decimals === 0) return sign + digits;
-    const padded = digits.length > decimals ? digits : '0'.repeat(decimals + 1 - digits.length) + digits;
-    const cut = padded.length - decimals;
-    let end = padded.length;
-    while (end > cut && padded.charCodeAt(end - 1) === 48) end--;
-    return sign + padded.slice(0, cut) + (end > cut ? '.' + padded.slice(cut, end) : '');
+    const whole = Math.floor(a / k);
+    let part = a - whole * k;
+    if (part === 0) return sign + whole;
+    let places = decimals;
+    while (part % 10 === 0) {
+      part /= 10;
+      places--;
+    }
+    const text = String(part);
+    return sign + whole + '.' + ZEROS[places - text.length]! + text;
   }
   return String(n / k);
 }
+const ZEROS = ['', '0', '00', '000', '0000', '00000', '000000'];
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
 export function pathToSvg(path: Path, decimals = 4): string {
   if (deferred && allFinite(path, decimals)) {
-    const token = `${DEFERRED_PREFIX}${deferred.run}:${deferred.texts.size}`;
+    const token = `${DEFERRED_PREFIX}${deferred.run}:${deferred.issued++}`;
     deferred.texts.set(token, { path, decimals, read: undefined });
     return token;
   }
@@ -478,6 +558,8 @@ interface DeferredRun {
   readonly run: number;
   /** `read` is made when first asked for: text printed by the last operation is never read back. */
   readonly texts: Map<string, { readonly path: Path; readonly decimals: number; read: Path | undefined }>;
+  /** Placeholders handed out so far (the number in the next one; entries may have been dropped by `retain`). */
+  issued: number;
 }
 let deferred: DeferredRun | undefined;
 let deferredRuns = 0;
@@ -486,18 +568,29 @@ const DEFERRED_PREFIX = '\u0000path:';
 /**
  * Run `body` with path printing deferred; `body` gets `resolve`, which turns a placeholder back
  * into its text (other strings come back unchanged), and must resolve every string it returns.
+ * It also gets `retain`: given every placeholder still in use (between operations: the texts of
+ * the current pattern), it lets the paths behind all others go. A dropped placeholder must not
+ * be read or resolved again; paths an operation replaced then die young instead of being kept
+ * (and copied by the garbage collector) until the end of the replay.
  * Nested calls run inside the outer one. Any text that already looks like a placeholder (never
  * valid path data) turns deferral off, so such input fails exactly as it would without it.
  */
-export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string) => T): T {
-  if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d);
-  const run: DeferredRun = { run: ++deferredRuns, texts: new Map() };
+export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string, retain: (inUse: readonly string[]) => void) => T): T {
+  if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d, () => {});
+  const run: DeferredRun = { run: ++deferredRuns, texts: new Map(), issued: 0 };
   deferred = run;
   try {
-    return body((d) => {
-      const entry = d.startsWith(DEFERRED_PREFIX) ? run.texts.get(d) : undefined;
-      return entry ? writePath(entry.path, entry.decimals) : d;
-    });
+    return body(
+      (d) => {
+        const entry = d.startsWith(DEFERRED_PREFIX) ? run.texts.get(d) : undefined;
+        return entry ? writePath(entry.path, entry.decimals) : d;
+      },
+      (inUse) => {
+        if (run.texts.size === 0) return;
+        const used = new Set(inUse);
+        for (const token of run.texts.keys()) if (!used.has(token)) run.texts.delete(token);
+      },
+    );
   } finally {
     deferred = undefined;
   }
@@ -522,18 +615,40 @@ function readBackOf(path: Path, decimals: number): Path {
     const n = Math.round(v * k);
     return n === 0 ? 0 : n / k;
   };
-  const commands: RawCommand[] = [];
+  // the commands pathToSvg prints, each number as it reads back, fed straight to the reader's rules
+  const b = new PathBuilder();
   for (const c of path) {
-    if (c.segments.length === 0) continue;
-    const first = c.segments[0]!;
-    commands.push({ c: 'M', v: [r(first.from.x), r(first.from.y)] });
-    c.segments.forEach((s, i) => {
-      if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return; // Z draws it
-      commands.push(s.kind === 'line' ? { c: 'L', v: [r(s.to.x), r(s.to.y)] } : { c: 'C', v: [r(s.c1.x), r(s.c1.y), r(s.c2.x), r(s.c2.y), r(s.to.x), r(s.to.y)] });
-    });
-    if (c.closed) commands.push({ c: 'Z', v: [] });
+    const segs = c.segments;
+    if (segs.length === 0) continue;
+    const first = segs[0]!;
+    b.move(r(first.from.x), r(first.from.y));
+    const same = Object.is;
+    for (let i = 0; i < segs.length; i++) {
+      const s = segs[i]!;
+      if (c.closed && i === segs.length - 1 && s.kind === 'line') continue; // Z draws it
+      // a segment whose numbers read back as they are (one an operation left alone), starting
+      // at the current point by value, is taken itself
+      const keep = same(b.current!.x, s.from.x) && same(b.current!.y, s.from.y);
+      if (s.kind === 'line') {
+        const x = r(s.to.x);
+        const y = r(s.to.y);
+        if (keep && same(x, s.to.x) && same(y, s.to.y)) b.same(s);
+        else b.line(x, y);
+      } else {
+        const x1 = r(s.c1.x);
+        const y1 = r(s.c1.y);
+        const x2 = r(s.c2.x);
+        const y2 = r(s.c2.y);
+        const x = r(s.to.x);
+        const y = r(s.to.y);
+        if (keep && same(x1, s.c1.x) && same(y1, s.c1.y) && same(x2, s.c2.x) && same(y2, s.c2.y) && same(x, s.to.x) && same(y, s.to.y)) b.same(s);
+        else b.curve(x1, y1, x2, y2, x, y);
+      }
+    }
+    if (c.closed) b.close();
   }
-  return keepUnchangedSegments(path, buildPath(commands));
+  b.finish();
+  return keepUnchangedSegments(path, b.contours);
 }
 
 /**
@@ -568,10 +683,10 @@ function sameSegment(a: Segment, b: Segment): boolean {
 /** A contour through the given points joined by straight lines. Fewer than 2 points give an empty contour. */
 export function contourFromPoints(input: readonly Point[], closed: boolean): Contour {
   // consecutive duplicates (within POINT_EPSILON) would make zero-length segments
-  const points = input.filter((p, i) => i === 0 || vecDistance(p, input[i - 1]!) > POINT_EPSILON);
+  const points = input.filter((p, i) => i === 0 || hypotAbove(p.x - input[i - 1]!.x, p.y - input[i - 1]!.y, POINT_EPSILON));
   const segments: Segment[] = [];
   for (let i = 1; i < points.length; i++) segments.push(lineSegment(points[i - 1]!, points[i]!));
-  if (closed && points.length > 2 && vecDistance(points[points.length - 1]!, points[0]!) > POINT_EPSILON)
+  if (closed && points.length > 2 && hypotAbove(points[points.length - 1]!.x - points[0]!.x, points[points.length - 1]!.y - points[0]!.y, POINT_EPSILON))
     segments.push(lineSegment(points[points.length - 1]!, points[0]!));
   return { segments, closed: closed && points.length > 2 };
 }
@@ -704,7 +819,7 @@ export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
       out.push(s.to);
       continue;
     }
-    const points = cubicFlattening(s, tolerance).points;
+    const points = flatteningPoints(s, cubicFlattening(s, tolerance));
     for (let k = 1; k < points.length; k++) out.push(points[k]!);
   }
   if (c.closed && out.length > 1) out.pop();
@@ -727,18 +842,26 @@ function flattenContour(c: Contour, tolerance: number): FlatPoint[] {
       out.push({ point: s.to, segmentIndex: i, t: 1 });
       return;
     }
-    const { ts, points } = cubicFlattening(s, tolerance);
+    const f = cubicFlattening(s, tolerance);
+    const ts = f.ts;
+    const points = flatteningPoints(s, f);
     for (let k = 1; k < ts.length; k++) out.push({ point: points[k]!, segmentIndex: i, t: ts[k]! });
   });
   if (c.closed && out.length > 1) out.pop();
   return out;
 }
 
-/** The flattening of one cubic: its parameters and points (points[0] unused). */
+/**
+ * The flattening of one cubic: its parameters and the coordinates of its points (index 0 is
+ * the start). Point objects are made only when a caller asks for them (flatteningPoints); the
+ * self-crossing check reads the coordinates.
+ */
 interface CubicFlattening {
   readonly tolerance: number;
   readonly ts: readonly number[];
-  readonly points: readonly Point[];
+  readonly xs: readonly number[];
+  readonly ys: readonly number[];
+  points: Point[] | undefined;
 }
 
 /**
@@ -761,22 +884,44 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
   }
   for (const f of kept) if (f.tolerance === tolerance) return f;
   const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
-  const points: Point[] = new Array<Point>(ts.length);
-  points[0] = s.from;
-  for (let k = 1; k < ts.length; k++) {
+  const n = ts.length;
+  // plain arrays of the final size: a small typed array costs several times as much to make
+  const xs = new Array<number>(n);
+  const ys = new Array<number>(n);
+  const { from, c1, c2, to } = s;
+  xs[0] = from.x;
+  ys[0] = from.y;
+  for (let k = 1; k < n; k++) {
     const t = ts[k]!;
+    if (t === 1) {
+      xs[k] = to.x;
+      ys[k] = to.y;
+      continue;
+    }
     // cubicPoint's arithmetic, inline
     const mt = 1 - t;
     const a = mt * mt * mt;
     const b = 3 * mt * mt * t;
     const d = 3 * mt * t * t;
     const e = t * t * t;
-    points[k] = t === 1 ? s.to : { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
+    xs[k] = a * from.x + b * c1.x + d * c2.x + e * to.x;
+    ys[k] = a * from.y + b * c1.y + d * c2.y + e * to.y;
   }
-  const f = { tolerance, ts, points };
+  const f: CubicFlattening = { tolerance, ts, xs, ys, points: undefined };
   if (kept.length >= CUBIC_FLATTEN_KEEP) kept.shift();
   kept.push(f);
   return f;
+}
+
+/** The points of a cubic's flattening (the start and t = 1 as the segment's own points), made once per flattening. */
+function flatteningPoints(s: Extract<Segment, { kind: 'cubic' }>, f: CubicFlattening): readonly Point[] {
+  if (f.points) return f.points;
+  const n = f.ts.length;
+  const points = new Array<Point>(n);
+  points[0] = s.from;
+  for (let k = 1; k < n; k++) points[k] = f.ts[k] === 1 ? s.to : { x: f.xs[k]!, y: f.ys[k]! };
+  f.points = points;
+  return points;
 }
 
 /** Where a contour crosses or touches itself. */
@@ -853,29 +998,42 @@ export function contourSelfCrossings(c: Contour, tolerance = FLATNESS): SelfCros
  * vertex before them (and, closed, of the first), as its filter drops them.
  */
 function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Float64Array; n: number } {
+  const segs = c.segments;
+  // each cubic's flattening, looked up once
+  const flats: (CubicFlattening | undefined)[] = new Array<CubicFlattening | undefined>(segs.length);
   let total = 1;
-  for (const s of c.segments) total += s.kind === 'line' ? 1 : cubicFlattening(s, tolerance).ts.length - 1;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (s.kind === 'line') total += 1;
+    else {
+      const f = cubicFlattening(s, tolerance);
+      flats[i] = f;
+      total += f.ts.length - 1;
+    }
+  }
   const xs = new Float64Array(total);
   const ys = new Float64Array(total);
   // raw vertices in order, as flattenContour lists them
   let m = 0;
-  const segs = c.segments;
   if (segs.length > 0) {
     xs[0] = segs[0]!.from.x;
     ys[0] = segs[0]!.from.y;
     m = 1;
   }
-  for (const s of segs) {
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
     if (s.kind === 'line') {
       xs[m] = s.to.x;
       ys[m] = s.to.y;
       m++;
       continue;
     }
-    const pts = cubicFlattening(s, tolerance).points;
-    for (let k = 1; k < pts.length; k++) {
-      xs[m] = pts[k]!.x;
-      ys[m] = pts[k]!.y;
+    const f = flats[i]!;
+    const fx = f.xs;
+    const fy = f.ys;
+    for (let k = 1; k < fx.length; k++) {
+      xs[m] = fx[k]!;
+      ys[m] = fy[k]!;
       m++;
     }
   }
@@ -887,7 +1045,7 @@ function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Fl
   for (let k = 0; k < m; k++) {
     const x = xs[k]!;
     const y = ys[k]!;
-    if (k === 0 || Math.hypot(x - px, y - py) > POINT_EPSILON) {
+    if (k === 0 || hypotAbove(x - px, y - py, POINT_EPSILON)) {
       xs[n] = x;
       ys[n] = y;
       n++;
@@ -895,7 +1053,7 @@ function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Fl
     px = x;
     py = y;
   }
-  if (c.closed && n > 1 && Math.hypot(xs[0]! - xs[n - 1]!, ys[0]! - ys[n - 1]!) <= POINT_EPSILON) n--;
+  if (c.closed && n > 1 && !hypotAbove(xs[0]! - xs[n - 1]!, ys[0]! - ys[n - 1]!, POINT_EPSILON)) n--;
   return { xs, ys, n };
 }
 
@@ -1017,7 +1175,7 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     }
     const dx = Math.max(minX - p.x, 0, p.x - maxX);
     const dy = Math.max(minY - p.y, 0, p.y - maxY);
-    if (Math.hypot(dx, dy) > best.distance) return;
+    if (hypotAbove(dx, dy, best.distance)) return;
     let t: number;
     if (s.kind === 'line') {
       const d = vecSub(s.to, s.from);
@@ -1091,7 +1249,7 @@ export function contourStretch(c: Contour, a: { segmentIndex: number; t: number 
   const out: Segment[] = [];
   const push = (s: Segment): void => {
     // arc length ≥ chord: a chord ten times POINT_EPSILON settles it without the quadrature
-    if (vecDistance(s.from, s.to) > 10 * POINT_EPSILON || segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
+    if (hypotAbove(s.from.x - s.to.x, s.from.y - s.to.y, 10 * POINT_EPSILON) || segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
   };
   const cmp = compareLoc(a, b);
   if (cmp < 0 || (cmp === 0 && !c.closed)) {

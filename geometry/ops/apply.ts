@@ -8,11 +8,11 @@ import type { Pattern } from '../model.ts';
 import { pathTextDeferred } from '../path.ts';
 import { blendOpSchema, performBlend } from './blend.ts';
 import { AlterationError, type Caution, type OpResult } from './common.ts';
-import { girthOpSchema, performGirth } from './girth.ts';
+import { girthOpSchema, performGirthParsed } from './girth.ts';
 import { markLineOpSchema, performMarkLine } from './mark-line.ts';
 import { lengthenOpSchema, performLengthen, performRise, riseOpSchema } from './lengthen.ts';
 import { performSeamAllowance, seamAllowanceOpSchema } from './seam-allowance.ts';
-import { performSlashSpread, slashSpreadOpSchema } from './slash-spread.ts';
+import { performSlashSpreadParsed, slashSpreadOpSchema } from './slash-spread.ts';
 import { performShrinkage, shrinkageOpSchema } from './shrinkage.ts';
 
 export const alterationOpSchema = z.discriminatedUnion('op', [lengthenOpSchema, riseOpSchema, blendOpSchema, shrinkageOpSchema, seamAllowanceOpSchema, girthOpSchema, slashSpreadOpSchema, markLineOpSchema]);
@@ -38,9 +38,9 @@ function performParsed(pattern: Pattern, op: z.output<typeof alterationOpSchema>
     case 'shrinkage':
       return performShrinkage(pattern, op);
     case 'slash-spread':
-      return performSlashSpread(pattern, op);
+      return performSlashSpreadParsed(pattern, op);
     case 'girth':
-      return performGirth(pattern, op);
+      return performGirthParsed(pattern, op);
     case 'seam-allowance':
       return performSeamAllowance(pattern, op);
     case 'mark-line':
@@ -59,8 +59,9 @@ export interface AppliedCaution extends Caution {
  */
 export function applyOps(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; cautions: AppliedCaution[] } {
   // Path text is printed once, at the end, not between operations (see pathTextDeferred).
-  return pathTextDeferred(patternTexts(pattern), (resolve) => {
-    const r = replay(pattern, ops);
+  return pathTextDeferred(patternTexts(pattern), (resolve, retain) => {
+    // between operations only the current pattern's texts can be read again
+    const r = replay(pattern, ops, (current) => retain(patternTexts(current)));
     return { pattern: resolveTexts(r.pattern, resolve), cautions: r.cautions };
   });
 }
@@ -102,7 +103,7 @@ function resolveTexts(pattern: Pattern, resolve: (d: string) => string): Pattern
   return piecesChanged ? { ...pattern, pieces } : pattern;
 }
 
-function replay(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; cautions: AppliedCaution[] } {
+function replay(pattern: Pattern, ops: readonly unknown[], performed: (current: Pattern) => void): { pattern: Pattern; cautions: AppliedCaution[] } {
   let current = pattern;
   const cautions: AppliedCaution[] = [];
   ops.forEach((raw, index) => {
@@ -115,6 +116,7 @@ function replay(pattern: Pattern, ops: readonly unknown[]): { pattern: Pattern; 
     try {
       const r = performParsed(current, parsed.data);
       current = r.pattern;
+      performed(current);
       for (const c of r.cautions) cautions.push({ ...c, op: index });
     } catch (error) {
       if (error instanceof AlterationError) throw new AlterationError(error.code, `operation ${index + 1} (${kind}): ${error.message}`, error.where);

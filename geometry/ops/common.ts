@@ -127,9 +127,11 @@ export function bandMapSegment(m: BandMap, s: Segment): Segment[] {
   return mapSegmentAt(m, s, cutsOf(m, s));
 }
 
-/** Where a segment meets each cut line, per cut line. */
-function cutsOf(m: BandMap, s: Segment): number[][] {
-  return m.breaks.map((b) => segmentLineIntersections(s, m.lineAt(b), m.direction));
+/** Where a segment meets each cut line, per cut line (`origins`: m.lineAt of each break, when the caller has them). */
+function cutsOf(m: BandMap, s: Segment, origins: readonly Point[] = m.breaks.map((b) => m.lineAt(b))): number[][] {
+  const out: number[][] = [];
+  for (let i = 0; i < origins.length; i++) out.push(segmentLineIntersections(s, origins[i]!, m.direction));
+  return out;
 }
 
 function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
@@ -147,7 +149,8 @@ function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])
 /** Map a path; returns the very same path when every part lies in an identity band (nothing moves). */
 export function bandMapPath(m: BandMap, path: Path): Path {
   // the cut-line intersections of each segment, found once for the test and for the mapping
-  const cuts = path.map((c) => c.segments.map((s) => cutsOf(m, s)));
+  const origins = m.breaks.map((b) => m.lineAt(b));
+  const cuts = path.map((c) => c.segments.map((s) => cutsOf(m, s, origins)));
   const untouched = path.every((c, ci) =>
     c.segments.every((s, si) => {
       for (const ts of cuts[ci]![si]!) if (ts.some((t) => t > 1e-9 && t < 1 - 1e-9)) return false;
@@ -176,7 +179,23 @@ export function mapOutline(outline: Outline, pathMap: (p: Path) => Path, pointMa
 }
 
 function roundPoint(p: Point): Point {
-  return { x: Number(p.x.toFixed(6)), y: Number(p.y.toFixed(6)) };
+  return { x: round6(p.x), y: round6(p.y) };
+}
+
+/**
+ * Number(v.toFixed(6)) without the string. toFixed rounds the exact value of v·10⁶ to the
+ * nearest integer n (halves away from zero) and the text reads back as the double nearest to
+ * n / 10⁶, which is what the division n / 1e6 gives (both correctly rounded). Below 1e9 the
+ * product v·1e6 is off the exact value by at most 1/16, so where it lies less than 0.4 from
+ * the integer it rounds to, that integer is n. Elsewhere (near a half, huge or non-finite
+ * values) toFixed itself decides. A zero keeps toFixed's sign: "-0.000000" only for v < 0.
+ */
+export function round6(v: number): number {
+  const s = v * 1e6;
+  const n = Math.round(s);
+  if (!(Math.abs(v) < 1e9 && Math.abs(s - n) < 0.4)) return Number(v.toFixed(6));
+  if (n === 0) return v < 0 ? -0 : 0;
+  return n / 1e6;
 }
 
 export function mapLine(line: PatternLine, pathMap: (p: Path) => Path): PatternLine {

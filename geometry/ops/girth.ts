@@ -54,8 +54,8 @@ interface Field {
   readonly active: (p: Point) => boolean;
   /** The same as active, for a point given by its coordinates (no object). */
   readonly activeXY: (x: number, y: number) => boolean;
-  /** False when no point of the convex hull of `points` can move (a quick reject). */
-  readonly mayMove: (points: readonly Point[]) => boolean;
+  /** False when no point of the convex hull of the segment's defining points can move (a quick reject). */
+  readonly mayMove: (s: Segment) => boolean;
   /** The lines where the field changes its formula: the grain line, the level, the ends of the taper. */
   readonly cuts: readonly { readonly origin: Point; readonly direction: Point }[];
   /** The field as a smooth map with its derivative (redrawMapped). */
@@ -167,18 +167,30 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
     },
     active: (p) => weight(p) > 0 && profile(beta(p)) > 0,
     activeXY: (x, y) => weightXY(x, y) > 0 && profile(x * gx + y * gy) > 0,
-    mayMove: (points) => {
-      const bs = points.map(beta);
+    mayMove: (s) => {
+      // the segment's defining points: their range along the grain, then whether any lies on the moving side
       const lo = op.level === 'waist' ? -Infinity : bLevel - op.above;
       const hi = op.level === 'hem' ? Infinity : bLevel + op.below;
-      if (Math.max(...bs) <= lo || Math.min(...bs) >= hi) return false;
-      return points.some((p) => (alpha(p) - centre) * sign > 0);
+      let bMin = s.from.x * gx + s.from.y * gy;
+      let bMax = bMin;
+      const bTo = s.to.x * gx + s.to.y * gy;
+      bMin = Math.min(bMin, bTo);
+      bMax = Math.max(bMax, bTo);
+      if (s.kind === 'cubic') {
+        const b1 = s.c1.x * gx + s.c1.y * gy;
+        const b2 = s.c2.x * gx + s.c2.y * gy;
+        bMin = Math.min(bMin, b1, b2);
+        bMax = Math.max(bMax, b1, b2);
+      }
+      if (bMax <= lo || bMin >= hi) return false;
+      const side = (p: Point): boolean => (p.x * ax + p.y * ay - centre) * sign > 0;
+      return side(s.from) || (s.kind === 'cubic' && (side(s.c1) || side(s.c2))) || side(s.to);
     },
   };
 }
 
 function deformSegment(s: Segment, field: Field): Segment[] {
-  if (!field.mayMove(s.kind === 'line' ? [s.from, s.to] : [s.from, s.c1, s.c2, s.to])) return [s];
+  if (!field.mayMove(s)) return [s];
   // parts between the lines where the field changes its formula; on each the field is smooth
   const ts = [0, ...segmentCutTimes(s, field.cuts), 1];
   const moves: boolean[] = [];
@@ -225,7 +237,11 @@ function deformPath(path: Path, field: Field): Path {
 }
 
 export function performGirth(pattern: Pattern, input: GirthOp): OpResult {
-  const op = girthOpSchema.parse(input);
+  return performGirthParsed(pattern, girthOpSchema.parse(input));
+}
+
+/** performGirth for an operation girthOpSchema has already parsed (applyOps parses each once). */
+export function performGirthParsed(pattern: Pattern, op: z.output<typeof girthOpSchema>): OpResult {
   if (op.pieces) for (const n of op.pieces) if (!pattern.pieces.some((p) => p.name === n)) throw new AlterationError('missing-piece', `there is no piece named "${n}"`);
   const has = (p: Piece): boolean => p.edges.some((e) => e.name === op.edge || e.role === op.edge);
   const hasLevel = (p: Piece): boolean => op.level === 'waist' || op.level === 'hem' || p.lines.some((l) => l.role === 'level' && l.name === op.level);

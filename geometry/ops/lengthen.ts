@@ -107,7 +107,17 @@ export function parallelSpreadMap(line: SpreadLine, g: Point, amount: number, zo
 function spreadPiece(piece: Piece, lineName: string, amount: number, zone: number, side: 1 | -1, what: string): Piece {
   const grain = pieceGrain(piece);
   const g = side === 1 ? grain : { x: -grain.x, y: -grain.y };
+  // one map per size (the outline of a size and its size's lines share it); a refusal is never kept
+  const maps = new Map<string | undefined, { map: BandMap; line: SpreadLine }>();
   const mapFor = (size: string | undefined): { map: BandMap; line: SpreadLine } => {
+    let known = maps.get(size);
+    if (!known) {
+      known = findMap(size);
+      maps.set(size, known);
+    }
+    return known;
+  };
+  const findMap = (size: string | undefined): { map: BandMap; line: SpreadLine } => {
     const candidates = piece.lines.filter((l) => l.role === 'lengthen' && l.name === lineName && (size === undefined ? true : l.size === undefined || l.size === size));
     const chosen = candidates.find((l) => l.size === size) ?? candidates.find((l) => l.size === undefined) ?? candidates[0];
     if (!chosen) throw new AlterationError('missing-line', `piece "${piece.name}" has no lengthen line "${lineName}"${size ? ` for size "${size}"` : ''}`);

@@ -232,19 +232,13 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   } else {
     runs = runsOf(piece, outline, contour, op);
     if (runs.length === 0) return undefined;
-    // the runs must tile the loop once, end to start
-    let total = 0;
+    // the runs must tile the loop once, end to start (their length is checked with the chords below)
     for (let r = 0; r < runs.length; r++) {
       const pts = runs[r]!.points;
       if (pts.length < 2) return undefined;
       const next = runs[(r + 1) % runs.length]!.points;
       if (vecDistance(pts[pts.length - 1]!, next[0]!) > 1e-6) return undefined;
-      for (let i = 1; i < pts.length; i++) total += vecDistance(pts[i - 1]!, pts[i]!);
     }
-    const flat = contourFlatPoints(contour, CUT_FLATNESS);
-    let perimeter = 0;
-    for (let i = 0; i < flat.length; i++) perimeter += vecDistance(flat[i]!, flat[(i + 1) % flat.length]!);
-    if (Math.abs(total - perimeter) > 1e-6 * Math.max(1, perimeter)) return undefined;
   }
   // chords: seam start (px, py), unit direction (dx, dy), length, width, run index
   let count = 0;
@@ -257,12 +251,15 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   const wd = new Float64Array(count);
   const run = new Int32Array(count);
   let k = 0;
+  // the length of the runs, chord by chord in order (each chord's length is its vecDistance: hypot is symmetric)
+  let total = 0;
   runs.forEach((r, ri) => {
     const pts = r.points;
     for (let i = 1; i < pts.length; i++) {
       const a = pts[i - 1]!;
       const b = pts[i]!;
       const l = Math.hypot(b.x - a.x, b.y - a.y);
+      total += l;
       if (!(l > 1e-9)) continue;
       px[k] = a.x;
       py[k] = a.y;
@@ -274,6 +271,13 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       k++;
     }
   });
+  if (!closedRun) {
+    // ... and together as long as the flattened loop
+    const flat = contourFlatPoints(contour, CUT_FLATNESS);
+    let perimeter = 0;
+    for (let i = 0; i < flat.length; i++) perimeter += vecDistance(flat[i]!, flat[(i + 1) % flat.length]!);
+    if (Math.abs(total - perimeter) > 1e-6 * Math.max(1, perimeter)) return undefined;
+  }
   const n = k;
   if (n < 3) return undefined;
   // where each offset chord starts and ends after its joins (mm along it from its seam start),

@@ -90,7 +90,10 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   const r = (hiNew - lo) / (hiOld - lo);
   const smooth: SmoothPlaneMap = (x, y, out) => {
     const p = { x, y };
-    const a = turn(p);
+    // turn(p) and region(p) below, with the distance to the hinge and the angle ψ found once
+    const near = vecDistance(p, hinge) < 1e-9;
+    const s = near ? 0 : psi(p);
+    const a = near ? 0 : side * (f(s) - s);
     const c = Math.cos(a);
     const sn = Math.sin(a);
     const q = vecRotateAbout(p, hinge, a);
@@ -103,7 +106,7 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
     const vx = x - hinge.x;
     const vy = y - hinge.y;
     const v2 = vx * vx + vy * vy;
-    if (vecDistance(p, hinge) < 1e-9 || region(p) !== 2) return;
+    if (near || s <= lo || !(s < hiOld)) return; // not in the zone (region(p) !== 2)
     // J = R + (R·perp(v)) ⊗ ∇turn
     const wx = c * -vy - sn * vx;
     const wy = sn * -vy + c * vx;
@@ -155,7 +158,11 @@ function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRota
 }
 
 export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpResult {
-  const op = slashSpreadOpSchema.parse(input);
+  return performSlashSpreadParsed(pattern, slashSpreadOpSchema.parse(input));
+}
+
+/** performSlashSpread for an operation slashSpreadOpSchema has already parsed (applyOps parses each once). */
+export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof slashSpreadOpSchema>): OpResult {
   const target = pattern.pieces.find((p) => p.name === op.piece);
   if (!target) throw new AlterationError('missing-piece', `there is no piece named "${op.piece}"`);
   const radius = vecDistance(op.from, op.hinge);

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, parsePattern, pathFromSvg, pathToSvg, performOp, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough } from '../../geometry/index.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
@@ -280,6 +280,42 @@ describe('contourSelfCrossings (lean sweep first)', () => {
         expect(contourSelfCrossings(contour).length > 0).toBe(expected);
       }),
       { numRuns: 2000 },
+    );
+  });
+});
+
+describe('distance tests on squares (hypotAbove)', () => {
+  it('decides as Math.hypot(dx, dy) > limit does, near the limit too', () => {
+    const limit = fc.constantFrom(0, 1e-6, 1e-5, 0.01, 1, 1e3, Infinity);
+    const any = fc.oneof(fc.double({ noNaN: false }), fc.double({ min: -1e-5, max: 1e-5 }), fc.double({ min: -1e-160, max: 1e-160 }));
+    // points at the limit's distance give the ties a squared test could get wrong
+    const onCircle = fc.tuple(fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }), fc.constantFrom(1 - 1e-15, 1, 1 + 1e-15, 1 - 1e-10, 1 + 1e-10));
+    fc.assert(
+      fc.property(limit, fc.oneof(fc.tuple(any, any), onCircle.map(([a, k]) => [Math.cos(a) * k, Math.sin(a) * k] as [number, number])), (l, [x, y]) => {
+        const dx = Number.isFinite(l) && l > 0 && Math.abs(x) <= 1.1 && Math.abs(y) <= 1.1 ? x * l : x;
+        const dy = Number.isFinite(l) && l > 0 && Math.abs(x) <= 1.1 && Math.abs(y) <= 1.1 ? y * l : y;
+        expect(hypotAbove(dx, dy, l)).toBe(Math.hypot(dx, dy) > l);
+      }),
+      { numRuns: 20000 },
+    );
+  });
+});
+
+describe('landmark rounding (round6)', () => {
+  it('gives Number(v.toFixed(6)), sign of zero included', () => {
+    const value = fc.oneof(
+      fc.double({ noNaN: false }),
+      fc.double({ min: -2000, max: 2000, noNaN: true }),
+      fc.integer({ min: -2_000_000_000, max: 2_000_000_000 }).map((n) => n / 1e6 + 5e-7), // halves
+      fc.integer({ min: -2_000_000_000, max: 2_000_000_000 }).map((n) => n / 1e6 - 5e-7),
+      fc.double({ min: -1e-5, max: 1e-5, noNaN: true }),
+      fc.double({ min: 9e8, max: 2e9, noNaN: true }),
+    );
+    fc.assert(
+      fc.property(value, (v) => {
+        expect(Object.is(round6(v), Number(v.toFixed(6)))).toBe(true);
+      }),
+      { numRuns: 20000 },
     );
   });
 });
