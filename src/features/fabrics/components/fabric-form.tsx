@@ -112,6 +112,90 @@ function HowChoice<T extends string>({
   );
 }
 
+/** A pair of lengths from a test (hand stretch or wash), or the percent typed straight in. */
+type TestDraft<A extends string, B extends string> = { how: 'percent' | 'test'; percent: string } & Record<A | B, string>;
+
+/**
+ * One property given either as a percent or as a test's two lengths (stretch: relaxed and
+ * stretched; shrinkage: before and after washing), with the percent the test gives shown live.
+ */
+function TestOrPercentFields<A extends string, B extends string>({
+  fieldKey,
+  title,
+  hint,
+  testName,
+  first,
+  second,
+  percentHint,
+  draft,
+  onChange,
+  unit,
+  errors,
+  result,
+}: {
+  fieldKey: FabricFieldSlot;
+  title: string;
+  hint?: string;
+  testName: string;
+  first: { key: A; label: string };
+  second: { key: B; label: string };
+  percentHint?: string;
+  draft: TestDraft<A, B>;
+  onChange: (draft: TestDraft<A, B>) => void;
+  unit: LengthUnit;
+  errors: SlotErrors;
+  /** What the test gives, in words, or null while it does not read. */
+  result: string | null;
+}) {
+  const lengthInput = ({ key, label }: { key: A | B; label: string }) => (
+    <LengthInput
+      name={`${fieldKey}.${key}`}
+      label={`${title}: ${label}`}
+      value={draft[key]}
+      unit={unit}
+      onChange={(value) => onChange({ ...draft, [key]: value })}
+      error={errors[`${fieldKey}.${key}` as FabricFieldSlot]}
+    />
+  );
+  return (
+    <fieldset className="flex min-w-0 flex-col gap-3 rounded-md border border-calico-300 p-4">
+      <legend className="px-1 font-semibold text-ink-900">{title}</legend>
+      {hint && <p className="text-xs text-ink-500">{hint}</p>}
+      <HowChoice
+        legend={`${title}: how it is given`}
+        value={draft.how}
+        options={[
+          { value: 'test', label: testName },
+          { value: 'percent', label: 'Percent' },
+        ]}
+        onChange={(how) => onChange({ ...draft, how })}
+      />
+      {draft.how === 'test' ? (
+        <div className="grid gap-3 sm:grid-cols-2">
+          {lengthInput(first)}
+          {lengthInput(second)}
+        </div>
+      ) : (
+        <NumberInput
+          name={fieldKey}
+          label={`${title} (%)`}
+          {...(percentHint ? { hint: percentHint } : {})}
+          value={draft.percent}
+          onChange={(percent) => onChange({ ...draft, percent })}
+          suffix="%"
+          error={errors[fieldKey]}
+        />
+      )}
+      {draft.how === 'test' && <FieldError>{errors[fieldKey]}</FieldError>}
+      {draft.how === 'test' && result !== null && (
+        <p role="status" className="text-sm font-semibold text-denim-700">
+          {title}: {result}
+        </p>
+      )}
+    </fieldset>
+  );
+}
+
 function StretchFields({
   side,
   title,
@@ -129,57 +213,21 @@ function StretchFields({
   unit: LengthUnit;
   errors: SlotErrors;
 }) {
-  const key = `properties.${side}` as const;
   const result = percentText(stretchFromDraft(draft, unit));
   return (
-    <fieldset className="flex min-w-0 flex-col gap-3 rounded-md border border-calico-300 p-4">
-      <legend className="px-1 font-semibold text-ink-900">{title}</legend>
-      <p className="text-xs text-ink-500">{hint}</p>
-      <HowChoice
-        legend={`${title}: how it is given`}
-        value={draft.how}
-        options={[
-          { value: 'test', label: 'Hand test' },
-          { value: 'percent', label: 'Percent' },
-        ]}
-        onChange={(how) => onChange({ ...draft, how })}
-      />
-      {draft.how === 'test' ? (
-        <div className="grid gap-3 sm:grid-cols-2">
-          <LengthInput
-            name={`${key}.relaxed`}
-            label={`${title}: relaxed length`}
-            value={draft.relaxed}
-            unit={unit}
-            onChange={(relaxed) => onChange({ ...draft, relaxed })}
-            error={errors[`${key}.relaxed`]}
-          />
-          <LengthInput
-            name={`${key}.stretched`}
-            label={`${title}: stretched length`}
-            value={draft.stretched}
-            unit={unit}
-            onChange={(stretched) => onChange({ ...draft, stretched })}
-            error={errors[`${key}.stretched`]}
-          />
-        </div>
-      ) : (
-        <NumberInput
-          name={key}
-          label={`${title} (%)`}
-          value={draft.percent}
-          onChange={(percent) => onChange({ ...draft, percent })}
-          suffix="%"
-          error={errors[key]}
-        />
-      )}
-      {draft.how === 'test' && <FieldError>{errors[key]}</FieldError>}
-      {draft.how === 'test' && result !== null && (
-        <p role="status" className="text-sm font-semibold text-denim-700">
-          {title}: {result} %
-        </p>
-      )}
-    </fieldset>
+    <TestOrPercentFields
+      fieldKey={`properties.${side}`}
+      title={title}
+      hint={hint}
+      testName="Hand test"
+      first={{ key: 'relaxed', label: 'relaxed length' }}
+      second={{ key: 'stretched', label: 'stretched length' }}
+      draft={draft}
+      onChange={onChange}
+      unit={unit}
+      errors={errors}
+      result={result === null ? null : `${result} %`}
+    />
   );
 }
 
@@ -198,57 +246,21 @@ function ShrinkageFields({
   unit: LengthUnit;
   errors: SlotErrors;
 }) {
-  const key = `properties.shrinkage.${grain}` as const;
   const result = percentText(shrinkageFromDraft(draft, unit));
   return (
-    <fieldset className="flex min-w-0 flex-col gap-3 rounded-md border border-calico-300 p-4">
-      <legend className="px-1 font-semibold text-ink-900">{title}</legend>
-      <HowChoice
-        legend={`${title}: how it is given`}
-        value={draft.how}
-        options={[
-          { value: 'test', label: 'Wash test' },
-          { value: 'percent', label: 'Percent' },
-        ]}
-        onChange={(how) => onChange({ ...draft, how })}
-      />
-      {draft.how === 'test' ? (
-        <div className="grid gap-3 sm:grid-cols-2">
-          <LengthInput
-            name={`${key}.before`}
-            label={`${title}: before washing`}
-            value={draft.before}
-            unit={unit}
-            onChange={(before) => onChange({ ...draft, before })}
-            error={errors[`${key}.before`]}
-          />
-          <LengthInput
-            name={`${key}.after`}
-            label={`${title}: after washing`}
-            value={draft.after}
-            unit={unit}
-            onChange={(after) => onChange({ ...draft, after })}
-            error={errors[`${key}.after`]}
-          />
-        </div>
-      ) : (
-        <NumberInput
-          name={key}
-          label={`${title} (%)`}
-          hint="+ shrinks, − grows."
-          value={draft.percent}
-          onChange={(percent) => onChange({ ...draft, percent })}
-          suffix="%"
-          error={errors[key]}
-        />
-      )}
-      {draft.how === 'test' && <FieldError>{errors[key]}</FieldError>}
-      {draft.how === 'test' && result !== null && (
-        <p role="status" className="text-sm font-semibold text-denim-700">
-          {title}: {result} % {Number(result.replace('−', '-')) < 0 ? '(grew)' : ''}
-        </p>
-      )}
-    </fieldset>
+    <TestOrPercentFields
+      fieldKey={`properties.shrinkage.${grain}`}
+      title={title}
+      testName="Wash test"
+      first={{ key: 'before', label: 'before washing' }}
+      second={{ key: 'after', label: 'after washing' }}
+      percentHint="+ shrinks, − grows."
+      draft={draft}
+      onChange={onChange}
+      unit={unit}
+      errors={errors}
+      result={result === null ? null : `${result} % ${Number(result.replace('−', '-')) < 0 ? '(grew)' : ''}`}
+    />
   );
 }
 
