@@ -185,7 +185,15 @@ function lineMidBeta(d: string, g: Point): number {
   return vecDot({ x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 }, g);
 }
 
-function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: Caution[]): Piece {
+/** A size that is not one of a piece's size lines (put into words once for the whole blend). */
+interface OffLineSize {
+  readonly label: string;
+  readonly piece: string;
+  /** The piece's printed range, "0–20", when the size is outside it; undefined between sizes. */
+  readonly outside?: string;
+}
+
+function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: Caution[], offLine: OffLineSize[]): Piece {
   const outlines = orderedOutlines(piece);
   const scale = sizeScale(outlines);
   const contours = outlines.map((o) => outlineContour(o));
@@ -200,9 +208,8 @@ function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: 
       throw new AlterationError('bad-size', `piece "${piece.name}" has no size "${label}" (sizes: ${scale.labels.join(', ')})`);
     const lo = scale.values[0]!;
     const hi = scale.values[scale.values.length - 1]!;
-    if (n < lo || n > hi)
-      cautions.push({ code: 'extrapolated-size', piece: piece.name, message: `size ${label} is outside the printed sizes ${scale.labels[0]}–${scale.labels[scale.labels.length - 1]} of "${piece.name}": it is extrapolated from the grade between the nearest sizes, an estimate — sew a test garment first` });
-    else cautions.push({ code: 'fractional-size', piece: piece.name, message: `size ${label} is not printed on "${piece.name}": it is interpolated between the neighbouring sizes` });
+    if (n < lo || n > hi) offLine.push({ label, piece: piece.name, outside: `${scale.labels[0]}–${scale.labels[scale.labels.length - 1]}` });
+    else offLine.push({ label, piece: piece.name });
     return n;
   };
 
@@ -386,7 +393,9 @@ function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: 
 export function performBlend(pattern: Pattern, input: BlendOp): OpResult {
   const op = blendOpSchema.parse(input);
   const cautions: Caution[] = [];
-  const pieces = pattern.pieces.map((p) => (p.outlines.length < 2 ? p : blendPiece(p, op, cautions)));
+  const offLine: OffLineSize[] = [];
+  const blended = pattern.pieces.filter((p) => p.outlines.length >= 2);
+  const pieces = pattern.pieces.map((p) => (p.outlines.length < 2 ? p : blendPiece(p, op, cautions, offLine)));
   // one caution per distinct message
   const seen = new Set<string>();
   const unique = cautions.filter((c) => {
@@ -395,5 +404,37 @@ export function performBlend(pattern: Pattern, input: BlendOp): OpResult {
     seen.add(key);
     return true;
   });
-  return { pattern: { ...pattern, pieces }, cautions: unique };
+  return { pattern: { ...pattern, pieces }, cautions: [...offLineCautions(offLine, blended.length), ...unique] };
+}
+
+/**
+ * The cautions for sizes between or beyond the printed ones, once for the whole blend rather
+ * than per piece and level: one naming every in-between size, and one per size outside the
+ * printed range (naming the pieces when not all of them).
+ */
+function offLineCautions(offLine: readonly OffLineSize[], blendedPieces: number): Caution[] {
+  const cautions: Caution[] = [];
+  const between = [...new Set(offLine.filter((o) => o.outside === undefined).map((o) => o.label))];
+  if (between.length > 0)
+    cautions.push({
+      code: 'fractional-size',
+      message: `${between.length === 1 ? `size ${between[0]} is` : `sizes ${between.slice(0, -1).join(', ')} and ${between[between.length - 1]} are`} between the printed sizes: ${between.length === 1 ? 'it is' : 'each is'} interpolated between the neighbouring sizes`,
+    });
+  const outside = new Map<string, { label: string; range: string; pieces: string[] }>();
+  for (const o of offLine) {
+    if (o.outside === undefined) continue;
+    const key = `${o.label}\u0000${o.outside}`;
+    const entry = outside.get(key) ?? { label: o.label, range: o.outside, pieces: [] };
+    if (!entry.pieces.includes(o.piece)) entry.pieces.push(o.piece);
+    outside.set(key, entry);
+  }
+  for (const { label, range, pieces } of outside.values()) {
+    const which = pieces.length < blendedPieces ? ` of ${pieces.map((p) => `"${p}"`).join(', ')}` : '';
+    cautions.push({
+      code: 'extrapolated-size',
+      ...(pieces.length === 1 ? { piece: pieces[0] } : {}),
+      message: `size ${label} is outside the printed sizes ${range}${which}: it is extrapolated from the grade between the nearest sizes, an estimate — sew a test garment first`,
+    });
+  }
+  return cautions;
 }

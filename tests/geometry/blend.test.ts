@@ -107,7 +107,8 @@ describe('blend — follows each chosen size at its level', () => {
 describe('blend — fractional and extrapolated sizes carry a caution', () => {
   it('size 5 everywhere lies midway between sizes 4 and 6 (the demo grade is linear), with a caution', () => {
     const r = performBlend(demo, { op: 'blend', levels: [ { level: 'waist', size: 5 }, { level: 'hem', size: '5' } ] });
-    expect(r.cautions.some((c) => c.code === 'fractional-size')).toBe(true);
+    // one caution for the whole blend, not one per piece and level
+    expect(r.cautions.filter((c) => c.code === 'fractional-size').map((c) => c.message)).toEqual(['size 5 is between the printed sizes: it is interpolated between the neighbouring sizes']);
     const front = piece(r.pattern, 'front');
     const { origin, direction } = levelLine(demo, 'front', 'knee', '4');
     const w = widthAlongLine(front.outlines[0]!, origin, direction);
@@ -122,6 +123,12 @@ describe('blend — fractional and extrapolated sizes carry a caution', () => {
     const c = r.cautions.find((x) => x.code === 'extrapolated-size');
     expect(c?.message).toMatch(/outside the printed sizes 0–20/);
     expect(c?.message).toMatch(/estimate/);
+    expect(r.cautions.filter((x) => x.code === 'extrapolated-size')).toHaveLength(1); // every piece: said once
+    const many = performBlend(demo, { op: 'blend', levels: [ { level: 'waist', size: '2.5' }, { level: 'hip', size: '7.5' }, { level: 'knee', size: '-1' } ] });
+    expect(many.cautions.map((x) => x.message)).toEqual([
+      'sizes 2.5 and 7.5 are between the printed sizes: each is interpolated between the neighbouring sizes',
+      'size -1 is outside the printed sizes 0–20 of "front", "back": it is extrapolated from the grade between the nearest sizes, an estimate — sew a test garment first',
+    ]);
     const wb = (p: Pattern, size?: string) => {
       const o = size ? piece(p, 'waistband').outlines.find((x) => x.size === size)! : piece(p, 'waistband').outlines[0]!;
       return widthAlongLine(o, { x: -10, y: 40 }, { x: 1, y: 0 });

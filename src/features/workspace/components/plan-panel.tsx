@@ -6,7 +6,7 @@ import { useFabricChoices } from '../api/get-fabrics';
 import { usePatternCharts } from '../api/get-pattern-charts';
 import { useMakeFit, useSetMakeFabric } from '../api/make-fit';
 import { type ChartSource, type PreviousMake, usePlanFit } from '../api/plan-fit';
-import { describeOp } from '../model/describe';
+import { describeOp, inUnits } from '../model/describe';
 import { fitChartData } from '../model/fit-chart';
 import { describeFitNote, fromPreviousNote } from '../model/fit-note';
 import { type Intent, newEntryId } from '../model/intents';
@@ -203,12 +203,12 @@ export function PlanPanel({ makeId, patternId, unit, entries, change }: { makeId
               );
             })}
           </ol>
+          {/* the planner's cautions end with "guidance, not a guarantee of fit"; lengths in the person's units */}
           {result.plan.cautions.map((c) => (
             <p key={c} className="rounded-md border border-tape-400 bg-tape-100 px-2 py-1 text-xs text-ink-900">
-              {c}
+              {inUnits(c, unit)}
             </p>
           ))}
-          <p className="text-xs text-ink-500">Sizing advice is guidance, not a guarantee of fit: sew a test garment first.</p>
           <Button
             variant="secondary"
             disabled={result.plan.steps.length === 0}
