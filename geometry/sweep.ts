@@ -2,9 +2,11 @@
  * Ordering for the sweeps over x (self-crossing check, seam allowance): indices sorted by a key
  * without a comparator callback. A stable merge sort (insertion-sorted runs of 16, then merged
  * bottom-up), so equal keys keep their index order, as a stable comparator sort leaves them.
+ * The order is in the first `count` entries of a scratch array (see scratchF64): read it before
+ * the next call.
  */
 export function orderByKey(key: Float64Array, count: number): Int32Array {
-  let src = new Int32Array(count);
+  let src = scratchI32(ORDER_A, count);
   for (let i = 0; i < count; i++) src[i] = i;
   const RUN = 16;
   for (let lo = 0; lo < count; lo += RUN) {
@@ -21,7 +23,7 @@ export function orderByKey(key: Float64Array, count: number): Int32Array {
     }
   }
   if (count <= RUN) return src;
-  let dst = new Int32Array(count);
+  let dst = scratchI32(ORDER_B, count);
   for (let width = RUN; width < count; width *= 2) {
     for (let lo = 0; lo < count; lo += 2 * width) {
       const mid = Math.min(count, lo + width);
@@ -39,3 +41,65 @@ export function orderByKey(key: Float64Array, count: number): Int32Array {
   }
   return src;
 }
+
+/**
+ * Scratch typed arrays, reused from call to call. Making a typed array of a few hundred entries
+ * costs a backing store outside the heap and garbage-collector work; the sweeps and the direct
+ * cut line made about twenty per outline. Each slot belongs to one function (the slot numbers
+ * below); a caller writes every entry it reads before reading it, reads only the first `n`
+ * (the array may be longer) and hands nothing out past its own return, so no result depends on
+ * what an earlier call left there. Arrays over SCRATCH_MAX entries are made fresh and not kept.
+ */
+const SCRATCH_MAX = 1 << 16;
+const F64_SCRATCH: (Float64Array | undefined)[] = [];
+const I32_SCRATCH: (Int32Array | undefined)[] = [];
+
+export function scratchF64(slot: number, n: number): Float64Array {
+  if (n > SCRATCH_MAX) return new Float64Array(n);
+  let a = F64_SCRATCH[slot];
+  if (!a || a.length < n) {
+    a = new Float64Array(Math.min(SCRATCH_MAX, Math.max(n, 2 * (a?.length ?? 128))));
+    F64_SCRATCH[slot] = a;
+  }
+  return a;
+}
+
+export function scratchI32(slot: number, n: number): Int32Array {
+  if (n > SCRATCH_MAX) return new Int32Array(n);
+  let a = I32_SCRATCH[slot];
+  if (!a || a.length < n) {
+    a = new Int32Array(Math.min(SCRATCH_MAX, Math.max(n, 2 * (a?.length ?? 128))));
+    I32_SCRATCH[slot] = a;
+  }
+  return a;
+}
+
+/** Int32 slots: orderByKey's two, the self-crossing sweep's active list, the direct cut line's links and active lists. */
+const ORDER_A = 0;
+const ORDER_B = 1;
+export const I32_SLOT = { crossActive: 2, cutRun: 3, cutNext: 4, cutPrev: 5, halvesEdges: 6, halvesProbes: 7 } as const;
+/** Float64 slots: the self-crossing sweep's vertices and boxes, the direct cut line's chords, joins and half-band sides. */
+export const F64_SLOT = {
+  crossXs: 0,
+  crossYs: 1,
+  crossMinX: 2,
+  crossMaxX: 3,
+  crossMinY: 4,
+  crossMaxY: 5,
+  cutPx: 6,
+  cutPy: 7,
+  cutDx: 8,
+  cutDy: 9,
+  cutLen: 10,
+  cutWd: 11,
+  cutFrom: 12,
+  cutTo: 13,
+  cutJx: 14,
+  cutJy: 15,
+  halvesAx: 16,
+  halvesAy: 17,
+  halvesBx: 18,
+  halvesBy: 19,
+  halvesLo: 20,
+  halvesHi: 21,
+} as const;
