@@ -453,26 +453,35 @@ function innerHalvesInside(
     add(p.x, p.y, q.x, q.y);
   }
   const probesFrom = count;
-  for (let i = 0; i < n; i++) {
-    const w = wd[i]!;
-    if (!(w > 0)) continue;
-    const ends = runEnds(i);
-    const s0 = ends.first ? -END_OVERLAP : 0;
-    const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
-    // inward normal: perp of the direction
-    const inx = -dy[i]! * w;
-    const iny = dx[i]! * w;
-    const x0 = px[i]! + s0 * dx[i]!;
-    const y0 = py[i]! + s0 * dy[i]!;
-    const x1 = px[i]! + s1 * dx[i]!;
-    const y1 = py[i]! + s1 * dy[i]!;
-    add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
-    add(x0 + inx, y0 + iny, x1 + inx, y1 + iny);
-    // An end of a half-band at a convex vertex inside a run lies inside the neighbouring
-    // half-band (see hiddenEnd), so it is not a side of their union and need not be tested.
-    if (ends.first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
-    if (ends.last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
-  }
+  // the sides of each kind in chord order, one kind after another (the seam chords, the inner
+  // sides, the ends): their keys then rise and fall in long runs, which orderByKey merges
+  for (let kind = 0; kind < 3; kind++)
+    for (let i = 0; i < n; i++) {
+      const w = wd[i]!;
+      if (!(w > 0)) continue;
+      if (kind === 0) {
+        add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
+        continue;
+      }
+      const ends = runEnds(i);
+      const s0 = ends.first ? -END_OVERLAP : 0;
+      const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
+      // inward normal: perp of the direction
+      const inx = -dy[i]! * w;
+      const iny = dx[i]! * w;
+      const x0 = px[i]! + s0 * dx[i]!;
+      const y0 = py[i]! + s0 * dy[i]!;
+      const x1 = px[i]! + s1 * dx[i]!;
+      const y1 = py[i]! + s1 * dy[i]!;
+      if (kind === 1) {
+        add(x0 + inx, y0 + iny, x1 + inx, y1 + iny);
+        continue;
+      }
+      // An end of a half-band at a convex vertex inside a run lies inside the neighbouring
+      // half-band (see hiddenEnd), so it is not a side of their union and need not be tested.
+      if (ends.first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
+      if (ends.last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
+    }
   // The pairs tested are those whose x ranges and y ranges both overlap; whether any of them
   // crosses does not depend on the order they come in, so the sweep runs along the longer side
   // of the box (a leg piece is several times taller than wide: far fewer segments active at once).
