@@ -869,9 +869,16 @@ interface CubicFlattening {
  * reads the extent at 0.05 mm, the self-crossing check flattens at FLATNESS). A cubic flattens
  * the same wherever it sits, so a contour that keeps most of its segments — an operation
  * changes a few curves, and readBackOf hands the unchanged ones back as the very same objects —
- * reflattens only the changed ones. Held weakly: no growth.
+ * reflattens only the changed ones. Bounded, in two generations: a Map of up to
+ * CUBIC_FLATTEN_GENERATION cubics and the one before it (a cubic found in the older one moves
+ * to the newer). A Map, not a WeakMap: setting a key in a WeakMap cost about 1 µs and work for
+ * the garbage collector (a tenth of the stack's time); a Map costs about half, and the bound
+ * keeps what it holds to a few thousand flattenings. Which entries are kept changes only the
+ * speed: a flattening made again is the same.
  */
-const CUBIC_FLATTEN_CACHE = new WeakMap<Segment, CubicFlattening[]>();
+let CUBIC_FLATTEN_CACHE = new Map<Segment, CubicFlattening[]>();
+let CUBIC_FLATTEN_OLDER = new Map<Segment, CubicFlattening[]>();
+const CUBIC_FLATTEN_GENERATION = 2048;
 
 /** The most tolerances kept per cubic (the oldest is dropped). */
 const CUBIC_FLATTEN_KEEP = 3;
@@ -879,7 +886,11 @@ const CUBIC_FLATTEN_KEEP = 3;
 function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
   let kept = CUBIC_FLATTEN_CACHE.get(s);
   if (!kept) {
-    kept = [];
+    kept = CUBIC_FLATTEN_OLDER.get(s) ?? [];
+    if (CUBIC_FLATTEN_CACHE.size >= CUBIC_FLATTEN_GENERATION) {
+      CUBIC_FLATTEN_OLDER = CUBIC_FLATTEN_CACHE;
+      CUBIC_FLATTEN_CACHE = new Map();
+    }
     CUBIC_FLATTEN_CACHE.set(s, kept);
   }
   for (const f of kept) if (f.tolerance === tolerance) return f;
