@@ -386,8 +386,9 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       changed = true;
     }
   }
-  const out: Point[] = [];
-  for (let i = 0; i < n; i++) if (prev[i] !== -1) out.push({ x: jx[i]!, y: jy[i]! });
+  // the join points of the chords kept, in order (a list of its final size)
+  const out = new Array<Point>(kept);
+  for (let i = 0, o = 0; i < n; i++) if (prev[i] !== -1) out[o++] = { x: jx[i]!, y: jy[i]! };
   const runEnds = (i: number) => ({
     first: !closedRun && run[i === 0 ? n - 1 : i - 1] !== run[i],
     last: !closedRun && run[i + 1 === n ? 0 : i + 1] !== run[i],
