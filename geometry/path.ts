@@ -1190,11 +1190,13 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
   // starts there, by the next check and by the next operation (read-only values, pure function)
   let memo = NEAREST_CACHE.get(c);
   if (!memo) {
-    memo = new Map();
+    memo = { count: 0, byX: new Map() };
     NEAREST_CACHE.set(c, memo);
   }
-  const key = `${p.x},${p.y}`;
-  const hit = memo.get(key);
+  // by x, then y: numbers as keys compare as the text `${x},${y}` did (0 and −0 alike, every
+  // other pair of doubles apart), without printing two numbers per look-up
+  let byY = memo.byX.get(p.x);
+  const hit = byY?.get(p.y);
   if (hit) return hit;
   let best: ContourLocation & { distance: number } = { segmentIndex: 0, t: 0, point: c.segments[0]!.from, distance: Infinity };
   c.segments.forEach((s, i) => {
@@ -1222,12 +1224,19 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     const dist = vecDistance(p, q);
     if (dist < best.distance) best = { segmentIndex: i, t, point: q, distance: dist };
   });
-  if (memo.size < 4096) memo.set(key, best);
+  if (memo.count < 4096) {
+    if (!byY) {
+      byY = new Map();
+      memo.byX.set(p.x, byY);
+    }
+    byY.set(p.y, best);
+    memo.count++;
+  }
   return best;
 }
 
 /** contourNearest results by contour object, then by point (held weakly, bounded per contour). */
-const NEAREST_CACHE = new WeakMap<Contour, Map<string, ContourLocation & { readonly distance: number }>>();
+const NEAREST_CACHE = new WeakMap<Contour, { count: number; byX: Map<number, Map<number, ContourLocation & { readonly distance: number }>> }>();
 
 /** All places where the contour meets an infinite line, in contour order. */
 export function contourLineIntersections(c: Contour, origin: Point, direction: Point): ContourLocation[] {

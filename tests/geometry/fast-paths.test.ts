@@ -175,6 +175,17 @@ describe('contourNearest (memo)', () => {
       { numRuns: 300 },
     );
   });
+
+  it('keeps points apart that share one coordinate, and takes 0 and −0 as the same (as its text key did)', () => {
+    const contour = contourFromPoints([{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }, { x: 0, y: 10 }], true);
+    const a = contourNearest(contour, { x: 5, y: 1 });
+    const b = contourNearest(contour, { x: 5, y: 9 });
+    const c = contourNearest(contour, { x: 1, y: 8 });
+    expect(a.point).toEqual({ x: 5, y: 0 });
+    expect(b.point).toEqual({ x: 5, y: 10 });
+    expect(c.point).toEqual({ x: 0, y: 8 });
+    expect(contourNearest(contour, { x: -0, y: 3 })).toBe(contourNearest(contour, { x: 0, y: 3 }));
+  });
 });
 
 describe('flattening of shared cubics (memo by segment)', () => {
