@@ -21,7 +21,7 @@ import {
   quadraticToCubic,
   solveQuadratic,
 } from './bezier.ts';
-import { orderByKey } from './sweep.ts';
+import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from './sweep.ts';
 import { CLOSE_GAP, FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
 import {
   type Affine,
@@ -869,9 +869,16 @@ interface CubicFlattening {
  * reads the extent at 0.05 mm, the self-crossing check flattens at FLATNESS). A cubic flattens
  * the same wherever it sits, so a contour that keeps most of its segments — an operation
  * changes a few curves, and readBackOf hands the unchanged ones back as the very same objects —
- * reflattens only the changed ones. Held weakly: no growth.
+ * reflattens only the changed ones. Bounded, in two generations: a Map of up to
+ * CUBIC_FLATTEN_GENERATION cubics and the one before it (a cubic found in the older one moves
+ * to the newer). A Map, not a WeakMap: setting a key in a WeakMap cost about 1 µs and work for
+ * the garbage collector (a tenth of the stack's time); a Map costs about half, and the bound
+ * keeps what it holds to a few thousand flattenings. Which entries are kept changes only the
+ * speed: a flattening made again is the same.
  */
-const CUBIC_FLATTEN_CACHE = new WeakMap<Segment, CubicFlattening[]>();
+let CUBIC_FLATTEN_CACHE = new Map<Segment, CubicFlattening[]>();
+let CUBIC_FLATTEN_OLDER = new Map<Segment, CubicFlattening[]>();
+const CUBIC_FLATTEN_GENERATION = 2048;
 
 /** The most tolerances kept per cubic (the oldest is dropped). */
 const CUBIC_FLATTEN_KEEP = 3;
@@ -879,7 +886,11 @@ const CUBIC_FLATTEN_KEEP = 3;
 function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
   let kept = CUBIC_FLATTEN_CACHE.get(s);
   if (!kept) {
-    kept = [];
+    kept = CUBIC_FLATTEN_OLDER.get(s) ?? [];
+    if (CUBIC_FLATTEN_CACHE.size >= CUBIC_FLATTEN_GENERATION) {
+      CUBIC_FLATTEN_OLDER = CUBIC_FLATTEN_CACHE;
+      CUBIC_FLATTEN_CACHE = new Map();
+    }
     CUBIC_FLATTEN_CACHE.set(s, kept);
   }
   for (const f of kept) if (f.tolerance === tolerance) return f;
@@ -1011,8 +1022,9 @@ function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Fl
       total += f.ts.length - 1;
     }
   }
-  const xs = new Float64Array(total);
-  const ys = new Float64Array(total);
+  // scratch arrays: mayCross, the only caller, reads them before anything else uses them
+  const xs = scratchF64(F64_SLOT.crossXs, total);
+  const ys = scratchF64(F64_SLOT.crossYs, total);
   // raw vertices in order, as flattenContour lists them
   let m = 0;
   if (segs.length > 0) {
@@ -1085,18 +1097,18 @@ function segmentsMeet(ax: number, ay: number, bx: number, by: number, cx: number
 
 /**
  * True when two non-neighbouring edges of the flattened contour meet by segmentsIntersect. The
- * sweep over x of contourSelfCrossings with the same pruning, on typed arrays and collecting
- * nothing.
+ * same pairs as the sweep over x of contourSelfCrossings, on typed arrays and collecting
+ * nothing (swept over y when the contour is taller than wide; see below).
  */
 function mayCross(c: Contour, tolerance: number): boolean {
   const { xs, ys, n } = flatVertices(c, tolerance);
   const closed = c.closed;
   const edgeCount = closed ? n : n - 1;
   if (edgeCount < 3) return false;
-  const minX = new Float64Array(edgeCount);
-  const maxX = new Float64Array(edgeCount);
-  const minY = new Float64Array(edgeCount);
-  const maxY = new Float64Array(edgeCount);
+  const minX = scratchF64(F64_SLOT.crossMinX, edgeCount);
+  const maxX = scratchF64(F64_SLOT.crossMaxX, edgeCount);
+  const minY = scratchF64(F64_SLOT.crossMinY, edgeCount);
+  const maxY = scratchF64(F64_SLOT.crossMaxY, edgeCount);
   for (let i = 0; i < edgeCount; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     minX[i] = Math.min(xs[i]!, xs[j]!);
@@ -1104,25 +1116,49 @@ function mayCross(c: Contour, tolerance: number): boolean {
     minY[i] = Math.min(ys[i]!, ys[j]!);
     maxY[i] = Math.max(ys[i]!, ys[j]!);
   }
-  // Any order by minX tests the same pairs: a pair is tested when the later of the two arrives
-  // and the earlier still reaches it, whichever of two equal keys comes first.
-  const order = orderByKey(minX, edgeCount);
-  const active = new Int32Array(edgeCount);
+  // The pairs tested are those whose x ranges overlap within 1e-12 and whose y ranges overlap:
+  // a sweep over x (any order by minX: a pair is tested when the later of the two arrives and the
+  // earlier still reaches it, whichever of two equal keys comes first) prunes on the first and
+  // tests the second. The answer (does any tested pair meet) does not depend on the order the
+  // pairs come in, so a piece taller than wide is swept over y instead, pruning on the y overlap
+  // and testing the x overlap (with its 1e-12): the same pairs, far fewer active at a time.
+  let boxMinX = Infinity;
+  let boxMaxX = -Infinity;
+  let boxMinY = Infinity;
+  let boxMaxY = -Infinity;
+  for (let i = 0; i < edgeCount; i++) {
+    if (minX[i]! < boxMinX) boxMinX = minX[i]!;
+    if (maxX[i]! > boxMaxX) boxMaxX = maxX[i]!;
+    if (minY[i]! < boxMinY) boxMinY = minY[i]!;
+    if (maxY[i]! > boxMaxY) boxMaxY = maxY[i]!;
+  }
+  const overY = boxMaxY - boxMinY > boxMaxX - boxMinX;
+  const lo = overY ? minY : minX; // sweep key
+  const hi = overY ? maxY : maxX;
+  const lo2 = overY ? minX : minY; // tested
+  const hi2 = overY ? maxX : maxY;
+  const sweepSlack = overY ? 0 : 1e-12;
+  const testSlack = overY ? 1e-12 : 0;
+  const order = orderByKey(lo, edgeCount);
+  const active = scratchI32(I32_SLOT.crossActive, edgeCount);
   let count = 0;
-  for (const e of order) {
-    const left = minX[e]! - 1e-12;
+  for (let r = 0; r < edgeCount; r++) {
+    const e = order[r]!;
+    const left = overY ? lo[e]! : lo[e]! - sweepSlack;
     let kept = 0;
     for (let j = 0; j < count; j++) {
       const o = active[j]!;
-      if (!(maxX[o]! < left)) active[kept++] = o;
+      if (!(hi[o]! < left)) active[kept++] = o;
     }
     count = kept;
     const e1 = e + 1 === n ? 0 : e + 1;
+    const eLo = overY ? lo2[e]! - testSlack : lo2[e]!;
+    const eHi = hi2[e]!;
     for (let j = 0; j < count; j++) {
       const o = active[j]!;
       const gap = Math.abs(o - e);
       if (gap <= 1 || (closed && gap === edgeCount - 1)) continue;
-      if (maxY[o]! < minY[e]! || maxY[e]! < minY[o]!) continue;
+      if (hi2[o]! < eLo || eHi < (overY ? lo2[o]! - testSlack : lo2[o]!)) continue;
       const o1 = o + 1 === n ? 0 : o + 1;
       if (
         segmentsMeet(xs[o]!, ys[o]!, xs[o1]!, ys[o1]!, xs[e]!, ys[e]!, xs[e1]!, ys[e1]!) ||
@@ -1154,11 +1190,13 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
   // starts there, by the next check and by the next operation (read-only values, pure function)
   let memo = NEAREST_CACHE.get(c);
   if (!memo) {
-    memo = new Map();
+    memo = { count: 0, byX: new Map() };
     NEAREST_CACHE.set(c, memo);
   }
-  const key = `${p.x},${p.y}`;
-  const hit = memo.get(key);
+  // by x, then y: numbers as keys compare as the text `${x},${y}` did (0 and −0 alike, every
+  // other pair of doubles apart), without printing two numbers per look-up
+  let byY = memo.byX.get(p.x);
+  const hit = byY?.get(p.y);
   if (hit) return hit;
   let best: ContourLocation & { distance: number } = { segmentIndex: 0, t: 0, point: c.segments[0]!.from, distance: Infinity };
   c.segments.forEach((s, i) => {
@@ -1186,12 +1224,19 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     const dist = vecDistance(p, q);
     if (dist < best.distance) best = { segmentIndex: i, t, point: q, distance: dist };
   });
-  if (memo.size < 4096) memo.set(key, best);
+  if (memo.count < 4096) {
+    if (!byY) {
+      byY = new Map();
+      memo.byX.set(p.x, byY);
+    }
+    byY.set(p.y, best);
+    memo.count++;
+  }
   return best;
 }
 
 /** contourNearest results by contour object, then by point (held weakly, bounded per contour). */
-const NEAREST_CACHE = new WeakMap<Contour, Map<string, ContourLocation & { readonly distance: number }>>();
+const NEAREST_CACHE = new WeakMap<Contour, { count: number; byX: Map<number, Map<number, ContourLocation & { readonly distance: number }>> }>();
 
 /** All places where the contour meets an infinite line, in contour order. */
 export function contourLineIntersections(c: Contour, origin: Point, direction: Point): ContourLocation[] {

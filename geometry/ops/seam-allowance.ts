@@ -22,7 +22,7 @@ import { EndType, FillRule, JoinType, areaD, inflatePathsD, unionD, type PathD }
 import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
-import { orderByKey } from '../sweep.ts';
+import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
 import { type Contour, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
@@ -243,13 +243,13 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   // chords: seam start (px, py), unit direction (dx, dy), length, width, run index
   let count = 0;
   for (const r of runs) count += r.points.length - 1;
-  const px = new Float64Array(count);
-  const py = new Float64Array(count);
-  const dx = new Float64Array(count);
-  const dy = new Float64Array(count);
-  const len = new Float64Array(count);
-  const wd = new Float64Array(count);
-  const run = new Int32Array(count);
+  const px = scratchF64(F64_SLOT.cutPx, count);
+  const py = scratchF64(F64_SLOT.cutPy, count);
+  const dx = scratchF64(F64_SLOT.cutDx, count);
+  const dy = scratchF64(F64_SLOT.cutDy, count);
+  const len = scratchF64(F64_SLOT.cutLen, count);
+  const wd = scratchF64(F64_SLOT.cutWd, count);
+  const run = scratchI32(I32_SLOT.cutRun, count);
   let k = 0;
   // the length of the runs, chord by chord in order (each chord's length is its vecDistance: hypot is symmetric)
   let total = 0;
@@ -282,12 +282,12 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   if (n < 3) return undefined;
   // where each offset chord starts and ends after its joins (mm along it from its seam start),
   // and the join point after each chord; chords are linked so that one trimmed away can go
-  const from = new Float64Array(n);
-  const to = new Float64Array(n);
-  const jx = new Float64Array(n);
-  const jy = new Float64Array(n);
-  const next = new Int32Array(n);
-  const prev = new Int32Array(n);
+  const from = scratchF64(F64_SLOT.cutFrom, n);
+  const to = scratchF64(F64_SLOT.cutTo, n);
+  const jx = scratchF64(F64_SLOT.cutJx, n);
+  const jy = scratchF64(F64_SLOT.cutJy, n);
+  const next = scratchI32(I32_SLOT.cutNext, n);
+  const prev = scratchI32(I32_SLOT.cutPrev, n);
   for (let i = 0; i < n; i++) {
     next[i] = i + 1 === n ? 0 : i + 1;
     prev[i] = i === 0 ? n - 1 : i - 1;
@@ -386,8 +386,9 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       changed = true;
     }
   }
-  const out: Point[] = [];
-  for (let i = 0; i < n; i++) if (prev[i] !== -1) out.push({ x: jx[i]!, y: jy[i]! });
+  // the join points of the chords kept, in order (a list of its final size)
+  const out = new Array<Point>(kept);
+  for (let i = 0, o = 0; i < n; i++) if (prev[i] !== -1) out[o++] = { x: jx[i]!, y: jy[i]! };
   const runEnds = (i: number) => ({
     first: !closedRun && run[i === 0 ? n - 1 : i - 1] !== run[i],
     last: !closedRun && run[i + 1 === n ? 0 : i + 1] !== run[i],
@@ -435,10 +436,10 @@ function innerHalvesInside(
 ): boolean {
   const c = cut.length;
   const m = 4 * n + c;
-  const ax = new Float64Array(m);
-  const ay = new Float64Array(m);
-  const bx = new Float64Array(m);
-  const by = new Float64Array(m);
+  const ax = scratchF64(F64_SLOT.halvesAx, m);
+  const ay = scratchF64(F64_SLOT.halvesAy, m);
+  const bx = scratchF64(F64_SLOT.halvesBx, m);
+  const by = scratchF64(F64_SLOT.halvesBy, m);
   let count = 0;
   const add = (x0: number, y0: number, x1: number, y1: number): void => {
     ax[count] = x0;
@@ -453,55 +454,83 @@ function innerHalvesInside(
     add(p.x, p.y, q.x, q.y);
   }
   const probesFrom = count;
-  for (let i = 0; i < n; i++) {
-    const w = wd[i]!;
-    if (!(w > 0)) continue;
-    const ends = runEnds(i);
-    const s0 = ends.first ? -END_OVERLAP : 0;
-    const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
-    // inward normal: perp of the direction
-    const inx = -dy[i]! * w;
-    const iny = dx[i]! * w;
-    const x0 = px[i]! + s0 * dx[i]!;
-    const y0 = py[i]! + s0 * dy[i]!;
-    const x1 = px[i]! + s1 * dx[i]!;
-    const y1 = py[i]! + s1 * dy[i]!;
-    add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
-    add(x0 + inx, y0 + iny, x1 + inx, y1 + iny);
-    // An end of a half-band at a convex vertex inside a run lies inside the neighbouring
-    // half-band (see hiddenEnd), so it is not a side of their union and need not be tested.
-    if (ends.first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
-    if (ends.last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
-  }
-  const minX = new Float64Array(count);
-  const maxX = new Float64Array(count);
+  // the sides of each kind in chord order, one kind after another (the seam chords, the inner
+  // sides, the ends): their keys then rise and fall in long runs, which orderByKey merges
+  for (let kind = 0; kind < 3; kind++)
+    for (let i = 0; i < n; i++) {
+      const w = wd[i]!;
+      if (!(w > 0)) continue;
+      if (kind === 0) {
+        add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
+        continue;
+      }
+      const ends = runEnds(i);
+      const s0 = ends.first ? -END_OVERLAP : 0;
+      const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
+      // inward normal: perp of the direction
+      const inx = -dy[i]! * w;
+      const iny = dx[i]! * w;
+      const x0 = px[i]! + s0 * dx[i]!;
+      const y0 = py[i]! + s0 * dy[i]!;
+      const x1 = px[i]! + s1 * dx[i]!;
+      const y1 = py[i]! + s1 * dy[i]!;
+      if (kind === 1) {
+        add(x0 + inx, y0 + iny, x1 + inx, y1 + iny);
+        continue;
+      }
+      // An end of a half-band at a convex vertex inside a run lies inside the neighbouring
+      // half-band (see hiddenEnd), so it is not a side of their union and need not be tested.
+      if (ends.first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
+      if (ends.last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
+    }
+  // The pairs tested are those whose x ranges and y ranges both overlap; whether any of them
+  // crosses does not depend on the order they come in, so the sweep runs along the longer side
+  // of the box (a leg piece is several times taller than wide: far fewer segments active at once).
+  let boxMinX = Infinity;
+  let boxMaxX = -Infinity;
+  let boxMinY = Infinity;
+  let boxMaxY = -Infinity;
   for (let s = 0; s < count; s++) {
-    minX[s] = Math.min(ax[s]!, bx[s]!);
-    maxX[s] = Math.max(ax[s]!, bx[s]!);
+    boxMinX = Math.min(boxMinX, ax[s]!, bx[s]!);
+    boxMaxX = Math.max(boxMaxX, ax[s]!, bx[s]!);
+    boxMinY = Math.min(boxMinY, ay[s]!, by[s]!);
+    boxMaxY = Math.max(boxMaxY, ay[s]!, by[s]!);
   }
-  // any order by minX tests the same pairs (see mayCross in path.ts)
-  const order = orderByKey(minX, count);
+  const overY = boxMaxY - boxMinY > boxMaxX - boxMinX;
+  const ua = overY ? ay : ax; // the sweep's coordinate
+  const ub = overY ? by : bx;
+  const va = overY ? ax : ay; // the other one
+  const vb = overY ? bx : by;
+  const lo = scratchF64(F64_SLOT.halvesLo, count);
+  const hi = scratchF64(F64_SLOT.halvesHi, count);
+  for (let s = 0; s < count; s++) {
+    lo[s] = Math.min(ua[s]!, ub[s]!);
+    hi[s] = Math.max(ua[s]!, ub[s]!);
+  }
+  // any order by lo tests the same pairs (see mayCross in path.ts)
+  const order = orderByKey(lo, count);
   const orient = (x0: number, y0: number, x1: number, y1: number, x2: number, y2: number): number => (x1 - x0) * (y2 - y0) - (y1 - y0) * (x2 - x0);
   // two active lists (edges of the cut, probes): each segment is tested against the other kind only
-  const activeEdges = new Int32Array(count);
-  const activeProbes = new Int32Array(count);
+  const activeEdges = scratchI32(I32_SLOT.halvesEdges, count);
+  const activeProbes = scratchI32(I32_SLOT.halvesProbes, count);
   let liveEdges = 0;
   let liveProbes = 0;
-  for (const e of order) {
-    const left = minX[e]!;
+  for (let r = 0; r < count; r++) {
+    const e = order[r]!;
+    const left = lo[e]!;
     const probe = e >= probesFrom;
     const others = probe ? activeEdges : activeProbes;
     let live = probe ? liveEdges : liveProbes;
     let kept = 0;
-    for (let k = 0; k < live; k++) if (!(maxX[others[k]!]! < left)) others[kept++] = others[k]!;
+    for (let k = 0; k < live; k++) if (!(hi[others[k]!]! < left)) others[kept++] = others[k]!;
     live = kept;
     if (probe) liveEdges = live;
     else liveProbes = live;
-    const eMinY = Math.min(ay[e]!, by[e]!);
-    const eMaxY = Math.max(ay[e]!, by[e]!);
+    const eMin = Math.min(va[e]!, vb[e]!);
+    const eMax = Math.max(va[e]!, vb[e]!);
     for (let k = 0; k < live; k++) {
       const o = others[k]!;
-      if (Math.max(ay[o]!, by[o]!) < eMinY || eMaxY < Math.min(ay[o]!, by[o]!)) continue;
+      if (Math.max(va[o]!, vb[o]!) < eMin || eMax < Math.min(va[o]!, vb[o]!)) continue;
       const d1 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, ax[e]!, ay[e]!);
       const d2 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, bx[e]!, by[e]!);
       if (d1 * d2 > 0) continue;

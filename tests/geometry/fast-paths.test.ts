@@ -6,6 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough } from '../../geometry/index.ts';
+import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
 const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
@@ -174,6 +175,17 @@ describe('contourNearest (memo)', () => {
       { numRuns: 300 },
     );
   });
+
+  it('keeps points apart that share one coordinate, and takes 0 and −0 as the same (as its text key did)', () => {
+    const contour = contourFromPoints([{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }, { x: 0, y: 10 }], true);
+    const a = contourNearest(contour, { x: 5, y: 1 });
+    const b = contourNearest(contour, { x: 5, y: 9 });
+    const c = contourNearest(contour, { x: 1, y: 8 });
+    expect(a.point).toEqual({ x: 5, y: 0 });
+    expect(b.point).toEqual({ x: 5, y: 10 });
+    expect(c.point).toEqual({ x: 0, y: 8 });
+    expect(contourNearest(contour, { x: -0, y: 3 })).toBe(contourNearest(contour, { x: 0, y: 3 }));
+  });
 });
 
 describe('flattening of shared cubics (memo by segment)', () => {
@@ -280,6 +292,31 @@ describe('contourSelfCrossings (lean sweep first)', () => {
         expect(contourSelfCrossings(contour).length > 0).toBe(expected);
       }),
       { numRuns: 2000 },
+    );
+  });
+});
+
+describe('orderByKey (natural runs, scratch arrays)', () => {
+  it('gives the stable order by key that a comparator sort gives, on runs, ties and shuffles', () => {
+    // keys as the sweeps see them: stretches that rise and fall (a polygon's edges in order),
+    // with repeated values, or no order at all (the plain merge sort's case)
+    const stretch = fc.record({ start: fc.integer({ min: -50, max: 50 }), steps: fc.array(fc.integer({ min: 0, max: 3 }), { maxLength: 40 }), down: fc.boolean() });
+    const runs = fc.array(stretch, { maxLength: 12 }).map((parts) =>
+      parts.flatMap(({ start, steps, down }) => {
+        let v = start;
+        return steps.map((d) => (v += down ? -d : d) / 4);
+      }),
+    );
+    const shuffled = fc.array(fc.integer({ min: -20, max: 20 }).map((v) => v / 8), { maxLength: 300 });
+    fc.assert(
+      fc.property(fc.oneof(runs, shuffled), (values) => {
+        const key = Float64Array.from(values);
+        const expected = values.map((_, i) => i).sort((a, b) => key[a]! - key[b]!); // Array.prototype.sort is stable
+        // a second call first, with other keys, so that stale scratch entries would show
+        orderByKey(Float64Array.from(values, (v) => -v), values.length);
+        expect(Array.from(orderByKey(key, values.length).subarray(0, values.length))).toEqual(expected);
+      }),
+      { numRuns: 3000 },
     );
   });
 });
