@@ -224,6 +224,13 @@ describe('the pattern\'s size table', () => {
     await section.getByLabel(/^Cells from a spreadsheet/).fill(text);
     await section.getByRole('button', { name: 'Read the pasted cells' }).click();
     await section.getByText('Read 2 sizes into Waist, Hip.').waitFor();
+    // Leaving with unsaved cells asks first; staying keeps them.
+    await page.getByRole('link', { name: 'Makes', exact: true }).click();
+    const leave = page.getByRole('alertdialog', { name: 'Leave without saving the size table?' });
+    await leave.getByRole('button', { name: 'Stay and save' }).click();
+    await leave.waitFor({ state: 'detached' });
+    expect(new URL(page.url()).pathname).toBe(`/patterns/${pattern.id}`);
+    await section.getByText('Not saved yet.').waitFor();
     await section.getByRole('button', { name: 'Save the table' }).click();
     await section.getByText('Not saved yet.').waitFor({ state: 'detached' });
 

@@ -1,5 +1,6 @@
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
-import { useId, useMemo, useState } from 'react';
+import { useCallback, useId, useMemo, useState } from 'react';
+import { useBeforeUnload, useBlocker } from 'react-router-dom';
 import { formatLength, type LengthUnit } from '../../../../geometry/units.ts';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
@@ -269,6 +270,16 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
   const serverFields = isApiError(save.error) ? Object.entries(save.error.fields) : [];
   const dirty = edited !== null;
   const problems = Object.values(cellProblems);
+  // Unsaved cells are not lost by leaving: the browser asks on closing the tab, the app on leaving the page.
+  const leaving = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
+  useBeforeUnload(
+    useCallback(
+      (event: BeforeUnloadEvent) => {
+        if (dirty) event.preventDefault();
+      },
+      [dirty],
+    ),
+  );
 
   if (charts.isPending) return <p className="text-sm text-ink-500">Loading the size table…</p>;
   if (charts.isError) return <FormAlert>{charts.error.message}</FormAlert>;
@@ -375,6 +386,17 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
                 </Button>
               </div>
               {dirty && <p className="text-xs font-medium text-ink-700">Not saved yet.</p>}
+              {leaving.state === 'blocked' && (
+                <div role="alertdialog" aria-label="Leave without saving the size table?" className="fixed inset-x-4 bottom-4 z-50 mx-auto flex max-w-xl flex-wrap items-center gap-3 rounded-md border border-madder-700/40 bg-madder-50 p-4 shadow-lg">
+                  <p className="flex-1 font-semibold text-madder-700">The size table has changes that are not saved. Leave without saving them?</p>
+                  <Button variant="secondary" autoFocus onClick={() => leaving.reset()}>
+                    Stay and save
+                  </Button>
+                  <Button variant="quiet" onClick={() => leaving.proceed()}>
+                    Leave without saving
+                  </Button>
+                </div>
+              )}
               {checked.length > 0 && (
                 <ul role="alert" className="text-sm font-medium text-madder-700">
                   {checked.map((p) => (
