@@ -827,6 +827,50 @@ export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
 }
 
 /**
+ * The length of contourFlatPoints(c, tolerance) taken as a closed polygon: the chords between
+ * its points in order, then the one from its last point back to its first, summed in that
+ * order; the same number (the same chords, added in the same order) without the list.
+ */
+export function contourFlatPerimeter(c: Contour, tolerance = FLATNESS): number {
+  const segs = c.segments;
+  if (segs.length === 0) return 0;
+  const x0 = segs[0]!.from.x;
+  const y0 = segs[0]!.from.y;
+  let total = 0;
+  let count = 1;
+  // the last point, the one before it, and the chord between them (added once a next point comes)
+  let lx = x0;
+  let ly = y0;
+  let bx = x0;
+  let by = y0;
+  let pending = 0;
+  const visit = (x: number, y: number): void => {
+    if (count > 1) total += pending;
+    pending = Math.hypot(lx - x, ly - y);
+    bx = lx;
+    by = ly;
+    lx = x;
+    ly = y;
+    count++;
+  };
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (s.kind === 'line') {
+      visit(s.to.x, s.to.y);
+      continue;
+    }
+    const f = cubicFlattening(s, tolerance);
+    const xs = f.xs;
+    const ys = f.ys;
+    for (let k = 1; k < xs.length; k++) visit(xs[k]!, ys[k]!);
+  }
+  // contourFlatPoints leaves out a closed contour's last point: its chord goes, the one before closes
+  if (c.closed && count > 1) return total + Math.hypot(bx - x0, by - y0);
+  if (count > 1) total += pending;
+  return total + Math.hypot(lx - x0, ly - y0);
+}
+
+/**
  * Flattenings by contour object and tolerance. Contours are read-only values and flattening is
  * a pure function of them, so sharing the result changes nothing; it saves flattening the same
  * outline again in the next check or operation (outlines an operation leaves alone are the
@@ -1199,7 +1243,11 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
   const hit = byY?.get(p.y);
   if (hit) return hit;
   let best: ContourLocation & { distance: number } = { segmentIndex: 0, t: 0, point: c.segments[0]!.from, distance: Infinity };
-  c.segments.forEach((s, i) => {
+  const segs = c.segments;
+  for (let i = 0; i < segs.length; i++) {
+    // nothing can come closer than 0 (the comparison below is strict): the rest cannot replace it
+    if (best.distance === 0) break;
+    const s = segs[i]!;
     // the curve lies in the box of its control points: skip segments whose box is farther than the best so far
     let minX = Math.min(s.from.x, s.to.x);
     let maxX = Math.max(s.from.x, s.to.x);
@@ -1213,7 +1261,7 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     }
     const dx = Math.max(minX - p.x, 0, p.x - maxX);
     const dy = Math.max(minY - p.y, 0, p.y - maxY);
-    if (hypotAbove(dx, dy, best.distance)) return;
+    if (hypotAbove(dx, dy, best.distance)) continue;
     let t: number;
     if (s.kind === 'line') {
       const d = vecSub(s.to, s.from);
@@ -1223,7 +1271,7 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     const q = segmentPoint(s, t);
     const dist = vecDistance(p, q);
     if (dist < best.distance) best = { segmentIndex: i, t, point: q, distance: dist };
-  });
+  }
   if (memo.count < 4096) {
     if (!byY) {
       byY = new Map();

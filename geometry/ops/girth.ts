@@ -68,8 +68,34 @@ interface Field {
   readonly affineOn: (part: Segment, mid: Point) => ((p: Point) => Point) | undefined;
 }
 
-function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpSchema>): Field {
-  const g = pieceGrain(piece);
+/**
+ * What girthField reads of the piece alone, worked out at most once per piece (not once per
+ * size line: eleven on the all-sizes demo): its grain, and where its grain line starts across
+ * it. Each is found where girthField first asks for it, so errors come in the same order.
+ */
+interface PieceFrame {
+  grain: () => Point;
+  /** vecDot(start of the grain line, or the origin, across): `alpha` is that dot product, the same function for every size line (across is square to the one grain). */
+  centre: (alpha: (p: Point) => number) => number;
+}
+
+function pieceFrame(piece: Piece): PieceFrame {
+  let grain: Point | undefined;
+  let centre: number | undefined;
+  return {
+    grain: () => (grain ??= pieceGrain(piece)),
+    centre: (alpha) => {
+      if (centre === undefined) {
+        const grainLine = piece.lines.find((l) => l.role === 'grain');
+        centre = grainLine ? alpha(pathFromSvg(grainLine.d)[0]!.segments[0]!.from) : alpha({ x: 0, y: 0 });
+      }
+      return centre;
+    },
+  };
+}
+
+function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpSchema>, frame: PieceFrame): Field {
+  const g = frame.grain();
   const across = vecPerp(g);
   const edge = piece.edges.find((e) => e.name === op.edge) ?? piece.edges.find((e) => e.role === op.edge);
   if (!edge) throw new AlterationError('missing-line', `piece "${piece.name}" has no edge "${op.edge}"`);
@@ -93,8 +119,7 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
     if (hits.length === 0) throw new AlterationError('bad-level', `level "${op.level}" does not cross edge "${edge.name}" of piece "${piece.name}" size "${outline.size}"`);
     at = hits[0]!.point;
   }
-  const grainLine = piece.lines.find((l) => l.role === 'grain');
-  const centre = grainLine ? alpha(pathFromSvg(grainLine.d)[0]!.segments[0]!.from) : alpha({ x: 0, y: 0 });
+  const centre = frame.centre(alpha);
   const half = alpha(at) - centre;
   if (Math.abs(half) < 1) throw new AlterationError('bad-level', `edge "${edge.name}" of piece "${piece.name}" lies on the grain line; there is no width to change`);
   if (op.amount < 0 && -op.amount >= Math.abs(half))
@@ -255,7 +280,8 @@ export function performGirthParsed(pattern: Pattern, op: z.output<typeof girthOp
   if (Math.abs(op.amount) > 25) cautions.push({ code: 'large-change', message: `a girth change of ${fmtMm(op.amount)} per edge is large; blending sizes may fit better (trade reference §3.10) — sew a test garment first` });
   const pieces = pattern.pieces.map((piece) => {
     if (!targets.includes(piece)) return piece;
-    const fields = new Map(piece.outlines.map((o) => [o.size, girthField(piece, o, op)]));
+    const frame = pieceFrame(piece);
+    const fields = new Map(piece.outlines.map((o) => [o.size, girthField(piece, o, op, frame)]));
     const mid = fields.get(piece.outlines[Math.floor((piece.outlines.length - 1) / 2)]!.size)!;
     const outlines = piece.outlines.map((o) => {
       const f = fields.get(o.size)!;

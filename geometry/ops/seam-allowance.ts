@@ -23,7 +23,7 @@ import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
-import { type Contour, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
+import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
@@ -273,9 +273,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   });
   if (!closedRun) {
     // ... and together as long as the flattened loop
-    const flat = contourFlatPoints(contour, CUT_FLATNESS);
-    let perimeter = 0;
-    for (let i = 0; i < flat.length; i++) perimeter += vecDistance(flat[i]!, flat[(i + 1) % flat.length]!);
+    const perimeter = contourFlatPerimeter(contour, CUT_FLATNESS);
     if (Math.abs(total - perimeter) > 1e-6 * Math.max(1, perimeter)) return undefined;
   }
   const n = k;

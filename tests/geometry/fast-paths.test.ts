@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -185,6 +185,78 @@ describe('contourNearest (memo)', () => {
     expect(b.point).toEqual({ x: 5, y: 10 });
     expect(c.point).toEqual({ x: 0, y: 8 });
     expect(contourNearest(contour, { x: -0, y: 3 })).toBe(contourNearest(contour, { x: 0, y: 3 }));
+  });
+});
+
+describe('contourNearest (a point on the contour)', () => {
+  it('gives the first segment that reaches the least distance, as the search over every segment does, also for points on its vertices', () => {
+    const segment = fc.tuple(point, point, fc.boolean());
+    fc.assert(
+      fc.property(point, fc.array(segment, { minLength: 1, maxLength: 6 }), fc.nat(), fc.boolean(), (start, parts, pick, closed) => {
+        let from = start;
+        const segments = parts.map(([c, to, straight]) => {
+          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
+          from = to;
+          return s;
+        });
+        const contour: Contour = { closed, segments };
+        // a vertex (an end point of two segments), as landmarks are; asked with a fresh object each time
+        const v = pick % 2 === 0 ? segments[pick % segments.length]!.from : segments[pick % segments.length]!.to;
+        const p = { x: v.x, y: v.y };
+        // reference: every segment, no pruning, the first strict least distance
+        let best = Infinity;
+        let index = 0;
+        let time = 0;
+        contour.segments.forEach((s, i) => {
+          let t: number;
+          let q: Point;
+          if (s.kind === 'line') {
+            const dx = s.to.x - s.from.x;
+            const dy = s.to.y - s.from.y;
+            const l2 = dx * dx + dy * dy;
+            t = l2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s.from.x) * dx + (p.y - s.from.y) * dy) / l2));
+            q = { x: s.from.x + dx * t, y: s.from.y + dy * t };
+          } else {
+            const c: Cubic = [s.from, s.c1, s.c2, s.to];
+            t = cubicNearestTime(c, p);
+            q = cubicPoint(c, t);
+          }
+          const d = Math.hypot(p.x - q.x, p.y - q.y);
+          if (d < best) {
+            best = d;
+            index = i;
+            time = t;
+          }
+        });
+        const found = contourNearest(contour, p);
+        expect(found.segmentIndex).toBe(index);
+        expect(found.t).toBe(time);
+        expectNear(found.distance, best, 1e-9 * Math.max(1, best));
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe('contourFlatPerimeter', () => {
+  it('is the sum of the chords of contourFlatPoints around the loop, in order, to the last digit', () => {
+    const segment = fc.tuple(point, point, fc.boolean());
+    fc.assert(
+      fc.property(point, fc.array(segment, { minLength: 0, maxLength: 6 }), fc.boolean(), fc.constantFrom(0.01, 0.02, 0.05), (start, parts, closed, tolerance) => {
+        let from = start;
+        const segments = parts.map(([c, to, straight]) => {
+          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
+          from = to;
+          return s;
+        });
+        const contour: Contour = { closed, segments };
+        const flat = contourFlatPoints(contour, tolerance);
+        let perimeter = 0;
+        for (let i = 0; i < flat.length; i++) perimeter += Math.hypot(flat[i]!.x - flat[(i + 1) % flat.length]!.x, flat[i]!.y - flat[(i + 1) % flat.length]!.y);
+        expect(contourFlatPerimeter(contour, tolerance)).toBe(perimeter);
+      }),
+      { numRuns: 300 },
+    );
   });
 });
 
