@@ -438,7 +438,16 @@ export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3
   const s1 = nx * (p1.x - ox) + ny * (p1.y - oy);
   const s2 = nx * (p2.x - ox) + ny * (p2.y - oy);
   const s3 = nx * (p3.x - ox) + ny * (p3.y - oy);
-  if (Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3)) < POINT_EPSILON) return [];
+  const sMax = Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3));
+  if (sMax < POINT_EPSILON) return [];
+  // All four control points clearly on one side of the line: no root can be accepted. On [0, 1]
+  // the curve's distance is a convex combination of s0…s3, so |f| ≥ m (m: the smallest |s_i|,
+  // all of one sign); on the PARAM_EPSILON margins it falls by at most 1e-9 · 54·sMax (|f′| ≤
+  // 3|a| + 2|b| + |cc| ≤ 54·sMax). With m > 1e-6·sMax, |f| stays above 9e-7·sMax there, while
+  // cubicRootsInto accepts a root only where |f| ≤ ROOT_RESIDUAL (1e-9) · its coefficients'
+  // scale (≤ 12·sMax) · (1 + 1e-9)³: the full search would return [] as well.
+  const m = 1e-6 * sMax;
+  if ((s0 > m && s1 > m && s2 > m && s3 > m) || (s0 < -m && s1 < -m && s2 < -m && s3 < -m)) return [];
   // Bernstein → power basis.
   const a = -s0 + 3 * s1 - 3 * s2 + s3;
   const b = 3 * s0 - 6 * s1 + 3 * s2;

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -425,6 +425,37 @@ describe('landmark rounding (round6)', () => {
         expect(Object.is(round6(v), Number(v.toFixed(6)))).toBe(true);
       }),
       { numRuns: 20000 },
+    );
+  });
+});
+
+describe('cubicLineIntersections (one-side reject)', () => {
+  /** The full search without the reject: the power-basis cubic of the signed distances, its roots clamped to [0, 1] within 1e-9, sorted, near repeats merged. */
+  function referenceIntersections(c: Cubic, origin: Point, direction: Point): number[] {
+    const dl = Math.hypot(direction.x, direction.y);
+    if (dl < 1e-6) return [];
+    const nx = -direction.y / dl;
+    const ny = direction.x / dl;
+    const [s0, s1, s2, s3] = c.map((p) => nx * (p.x - origin.x) + ny * (p.y - origin.y)) as [number, number, number, number];
+    if (Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3)) < 1e-6) return [];
+    const roots = solveCubic(-s0 + 3 * s1 - 3 * s2 + s3, 3 * s0 - 6 * s1 + 3 * s2, -3 * s0 + 3 * s1, s0)
+      .filter((t) => t >= -1e-9 && t <= 1 + 1e-9)
+      .map((t) => Math.min(1, Math.max(0, t)))
+      .sort((a, b) => a - b);
+    const out: number[] = [];
+    for (const t of roots) if (out.length === 0 || t - out[out.length - 1]! > 1e-8) out.push(t);
+    return out;
+  }
+  const small = fc.oneof(fc.constant(0), fc.double({ min: -1e-3, max: 1e-3, noNaN: true }), fc.double({ min: -1e-9, max: 1e-9, noNaN: true }), coord);
+  it('gives the full search’s parameters to the last digit, lines through or just beside the control points included', () => {
+    fc.assert(
+      fc.property(cubic, fc.integer({ min: 0, max: 3 }), point, small, (c, at, dir, off) => {
+        // a line through one control point (or nearly): the curve touches it at an end, or all its control points lie barely on one side
+        const dl = Math.hypot(dir.x, dir.y);
+        const o = dl === 0 ? c[at]! : { x: c[at]!.x - (dir.y / dl) * off, y: c[at]!.y + (dir.x / dl) * off };
+        expect(cubicLineIntersections(c, o, dir)).toEqual(referenceIntersections(c, o, dir));
+      }),
+      { numRuns: 2000 },
     );
   });
 });
