@@ -148,17 +148,47 @@ function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])
 
 /** Map a path; returns the very same path when every part lies in an identity band (nothing moves). */
 export function bandMapPath(m: BandMap, path: Path): Path {
-  // the cut-line intersections of each segment, found once for the test and for the mapping
+  // the cut-line intersections of each segment, found once for the test and for the mapping;
+  // a segment no cut line splits (no time strictly inside by more than PARAM_EPSILON, so
+  // segmentSplitAt hands it back whole) keeps the map of its band, found once for both too
   const origins = m.breaks.map((b) => m.lineAt(b));
-  const cuts = path.map((c) => c.segments.map((s) => cutsOf(m, s, origins)));
-  const untouched = path.every((c, ci) =>
-    c.segments.every((s, si) => {
-      for (const ts of cuts[ci]![si]!) if (ts.some((t) => t > 1e-9 && t < 1 - 1e-9)) return false;
-      return m.maps[bandIndex(m, m.coordinate(segmentPoint(s, 0.5)))] === AFFINE_IDENTITY;
-    }),
-  );
+  const cuts: (number[][] | undefined)[][] = [];
+  const whole: (Affine | undefined)[][] = [];
+  let untouched = true;
+  for (const c of path) {
+    const cc: (number[][] | undefined)[] = [];
+    const cw: (Affine | undefined)[] = [];
+    for (const s of c.segments) {
+      const ts = cutsOf(m, s, origins);
+      let split = false;
+      for (const list of ts) for (const t of list) if (t > PARAM_EPSILON && t < 1 - PARAM_EPSILON) split = true;
+      if (split) {
+        untouched = false;
+        cc.push(ts);
+        cw.push(undefined);
+      } else {
+        const map = m.maps[bandIndex(m, m.coordinate(segmentPoint(s, 0.5)))]!;
+        if (map !== AFFINE_IDENTITY) untouched = false;
+        cc.push(undefined);
+        cw.push(map);
+      }
+    }
+    cuts.push(cc);
+    whole.push(cw);
+  }
   if (untouched) return path;
-  return path.map((c, ci) => ({ closed: c.closed, segments: c.segments.flatMap((s, si) => mapSegmentAt(m, s, cuts[ci]![si]!)) }));
+  return path.map((c, ci) => {
+    const segments: Segment[] = [];
+    const cc = cuts[ci]!;
+    const cw = whole[ci]!;
+    for (let si = 0; si < c.segments.length; si++) {
+      const s = c.segments[si]!;
+      const map = cw[si];
+      if (map === undefined) segments.push(...mapSegmentAt(m, s, cc[si]!));
+      else segments.push(map === AFFINE_IDENTITY ? s : segmentTransform(s, map));
+    }
+    return { closed: c.closed, segments };
+  });
 }
 
 /** Map path data; the same text comes back when the map returns the same path (nothing moved). */
