@@ -1344,22 +1344,27 @@ export function contourStretch(c: Contour, a: { segmentIndex: number; t: number 
     // arc length ≥ chord: a chord ten times POINT_EPSILON settles it without the quadrature
     if (hypotAbove(s.from.x - s.to.x, s.from.y - s.to.y, 10 * POINT_EPSILON) || segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
   };
+  // A cubic taken whole (from 0 to 1: a location on its end vertex) is the cubic itself:
+  // segmentSlice would make a new segment of the very same points (cubicSlice hands the curve
+  // back as it is), which the per-cubic flattening memo would not find. Lines are sliced as
+  // before (their interpolation may move the last digit).
+  const slice = (s: Segment, t0: number, t1: number): Segment => (s.kind === 'cubic' && t0 <= 0 && t1 >= 1 ? s : segmentSlice(s, t0, t1));
   const cmp = compareLoc(a, b);
   if (cmp < 0 || (cmp === 0 && !c.closed)) {
     if (a.segmentIndex === b.segmentIndex) {
-      if (cmp < 0) push(segmentSlice(segs[a.segmentIndex]!, a.t, b.t));
+      if (cmp < 0) push(slice(segs[a.segmentIndex]!, a.t, b.t));
     } else {
-      push(segmentSlice(segs[a.segmentIndex]!, a.t, 1));
+      push(slice(segs[a.segmentIndex]!, a.t, 1));
       for (let i = a.segmentIndex + 1; i < b.segmentIndex; i++) push(segs[i]!);
-      push(segmentSlice(segs[b.segmentIndex]!, 0, b.t));
+      push(slice(segs[b.segmentIndex]!, 0, b.t));
     }
     return { segments: out, closed: false };
   }
   if (!c.closed) return { segments: [], closed: false };
-  push(segmentSlice(segs[a.segmentIndex]!, a.t, 1));
+  push(slice(segs[a.segmentIndex]!, a.t, 1));
   for (let i = a.segmentIndex + 1; i < segs.length; i++) push(segs[i]!);
   for (let i = 0; i < b.segmentIndex; i++) push(segs[i]!);
-  push(segmentSlice(segs[b.segmentIndex]!, 0, b.t));
+  push(slice(segs[b.segmentIndex]!, 0, b.t));
   return { segments: out, closed: false };
 }
 

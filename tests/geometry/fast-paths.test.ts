@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, round6, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -456,6 +456,58 @@ describe('cubicLineIntersections (one-side reject)', () => {
         expect(cubicLineIntersections(c, o, dir)).toEqual(referenceIntersections(c, o, dir));
       }),
       { numRuns: 2000 },
+    );
+  });
+});
+
+describe('contourStretch (a cubic taken whole is kept)', () => {
+  it('gives the numbers of the stretch sliced with segmentSlice everywhere, with locations on vertices and inside segments', () => {
+    const loc = (n: number) => fc.record({ segmentIndex: fc.integer({ min: 0, max: n - 1 }), t: fc.oneof(fc.constant(0), fc.constant(1), fc.double({ min: 0, max: 1, noNaN: true })) });
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(point, point, point, fc.boolean()), { minLength: 2, maxLength: 6 }),
+        point,
+        fc.boolean(),
+        fc.nat(),
+        fc.nat(),
+        (parts, start, closed, i, j) => {
+          // a contour of cubics and lines through random points
+          let d = `M${start.x} ${start.y}`;
+          for (const [c1, c2, to, line] of parts) d += line ? ` L${to.x} ${to.y}` : ` C${c1.x} ${c1.y} ${c2.x} ${c2.y} ${to.x} ${to.y}`;
+          if (closed) d += ' Z';
+          const c = pathFromSvg(d)[0];
+          if (!c || c.segments.length === 0) return;
+          const n = c.segments.length;
+          const [a, b] = fc.sample(fc.tuple(loc(n), loc(n)), { numRuns: 1, seed: i * 7919 + j })[0]!;
+          const got = contourStretch(c, a, b);
+          // the reference: every end segment sliced (values compared, −0 told apart from 0)
+          const sliced = (s: (typeof c.segments)[number], t0: number, t1: number) => segmentSlice(s, t0, t1);
+          const ref = ((): typeof c.segments => {
+            const segs = c.segments;
+            // the same rule for dropping near-empty parts: a chord over ten POINT_EPSILON or an arc length over POINT_EPSILON
+            const keep = (s: (typeof segs)[number]) => Math.hypot(s.from.x - s.to.x, s.from.y - s.to.y) > 10 * POINT_EPSILON || segmentLength(s, 1e-3) > POINT_EPSILON;
+            const out: (typeof segs)[number][] = [];
+            const cmp = a.segmentIndex - b.segmentIndex || a.t - b.t;
+            if (cmp < 0 || (cmp === 0 && !c.closed)) {
+              if (a.segmentIndex === b.segmentIndex) {
+                if (cmp < 0) out.push(sliced(segs[a.segmentIndex]!, a.t, b.t));
+              } else {
+                out.push(sliced(segs[a.segmentIndex]!, a.t, 1));
+                for (let k = a.segmentIndex + 1; k < b.segmentIndex; k++) out.push(segs[k]!);
+                out.push(sliced(segs[b.segmentIndex]!, 0, b.t));
+              }
+            } else if (c.closed) {
+              out.push(sliced(segs[a.segmentIndex]!, a.t, 1));
+              for (let k = a.segmentIndex + 1; k < segs.length; k++) out.push(segs[k]!);
+              for (let k = 0; k < b.segmentIndex; k++) out.push(segs[k]!);
+              out.push(sliced(segs[b.segmentIndex]!, 0, b.t));
+            }
+            return out.filter(keep);
+          })();
+          expect(got.segments).toStrictEqual(ref);
+        },
+      ),
+      { numRuns: 500 },
     );
   });
 });
