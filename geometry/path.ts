@@ -143,10 +143,12 @@ export function segmentMapPoints(s: Segment, f: (p: Point) => Point): Segment {
 /** Parameters where the segment meets an infinite line, sorted. */
 export function segmentLineIntersections(s: Segment, origin: Point, direction: Point): number[] {
   if (s.kind === 'line') {
-    const d = vecSub(s.to, s.from);
-    const den = vecCross(d, direction);
-    if (Math.abs(den) < 1e-12 * Math.max(1, Math.hypot(d.x, d.y) * Math.hypot(direction.x, direction.y))) return [];
-    const t = vecCross(vecSub(origin, s.from), direction) / den;
+    // vecSub and vecCross written out (the same arithmetic in the same order, without the objects)
+    const dx = s.to.x - s.from.x;
+    const dy = s.to.y - s.from.y;
+    const den = dx * direction.y - dy * direction.x;
+    if (Math.abs(den) < 1e-12 * Math.max(1, Math.hypot(dx, dy) * Math.hypot(direction.x, direction.y))) return [];
+    const t = ((origin.x - s.from.x) * direction.y - (origin.y - s.from.y) * direction.x) / den;
     return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
   }
   return cubicPointsLineIntersections(s.from, s.c1, s.c2, s.to, origin, direction);
