@@ -40,20 +40,25 @@ export const girthAtHeightSchema = z.object({
 });
 export type GirthAtHeight = z.infer<typeof girthAtHeightSchema>;
 
+/** Girths at heights: at most 40, each height once (the server's profiles use the same rule). */
+export const girthsAtHeightsSchema = z
+  .array(girthAtHeightSchema, { error: 'girthsAtHeights must be a list of { offset, girth }' })
+  .max(40, 'keep to 40 girths at heights')
+  .superRefine((rows, ctx) => {
+    const seen = new Set<number>();
+    rows.forEach((g, i) => {
+      if (seen.has(g.offset)) ctx.addIssue({ code: 'custom', path: [i, 'offset'], message: `the height ${g.offset} mm is given twice` });
+      seen.add(g.offset);
+    });
+  });
+
 const profileShape = z
   .object({
     name: z.string().trim().min(1).max(80).optional(),
     ...Object.fromEntries(BODY_MEASUREMENT_NAMES.map((n) => [n, mm.optional()])),
-    girthsAtHeights: z.array(girthAtHeightSchema).max(40).default([]),
+    girthsAtHeights: girthsAtHeightsSchema.default([]),
   })
-  .strict()
-  .superRefine((p, ctx) => {
-    const seen = new Set<number>();
-    p.girthsAtHeights.forEach((g, i) => {
-      if (seen.has(g.offset)) ctx.addIssue({ code: 'custom', path: ['girthsAtHeights', i, 'offset'], message: `offset ${g.offset} mm is given twice` });
-      seen.add(g.offset);
-    });
-  });
+  .strict();
 
 /**
  * A measurement profile. Accepts the flat form `{ waistGirth, …, girthsAtHeights }` or the

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { BODY_MEASUREMENT_NAMES, type BodyMeasurementName, girthAtHeightSchema } from '../../../geometry/index.ts';
+import { BODY_MEASUREMENT_NAMES, type BodyMeasurementName, girthsAtHeightsSchema } from '../../../geometry/index.ts';
 
 /**
  * Body measurements a profile keeps, in millimetres. Names follow ISO 8559-1 (body dimensions
@@ -13,17 +13,6 @@ const measurement = z.number({ error: 'must be a number of millimetres' }).posit
 
 const measurementRecord = z.partialRecord(z.enum(MEASUREMENT_NAMES), measurement);
 export const measurementsSchema = measurementRecord.default({});
-
-export const girthsAtHeightsSchema = z
-  .array(girthAtHeightSchema, { error: 'girthsAtHeights must be a list of { offset, girth }.' })
-  .max(40, 'Keep to 40 girths at heights.')
-  .superRefine((rows, ctx) => {
-    const seen = new Set<number>();
-    rows.forEach((g, i) => {
-      if (seen.has(g.offset)) ctx.addIssue({ code: 'custom', path: [i, 'offset'], message: `The height ${g.offset} mm is given twice.` });
-      seen.add(g.offset);
-    });
-  });
 
 /** Today as `YYYY-MM-DD` (UTC). */
 export const today = (): string => new Date().toISOString().slice(0, 10);
