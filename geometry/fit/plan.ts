@@ -616,11 +616,14 @@ export function planFit(input: PlanInput): FitPlan {
   let after: GarmentGirths | null = null;
   if (pattern && steps.length > 0) {
     try {
-      const r = applyOps(pattern, steps.map((s) => s.op));
-      // fractional sizes are the plan itself (each level says so); other notes are passed on
-      for (const c of r.cautions) if (c.code !== 'fractional-size') caution(`Step ${c.op + 1}: ${c.message}`);
+      // the shrinkage allowance is planned last: the garment as worn is the pattern just before it
       const worn = steps.filter((st) => st.op.op !== 'shrinkage').map((st) => st.op);
-      after = measureGirths(worn.length === steps.length ? r.pattern : applyOps(pattern, worn).pattern, 'after the plan', opts.seamAllowance);
+      const asWorn = applyOps(pattern, worn);
+      const shrink = steps.slice(worn.length).map((st) => st.op);
+      const cautions = [...asWorn.cautions, ...(shrink.length > 0 ? applyOps(asWorn.pattern, shrink).cautions.map((c) => ({ ...c, op: c.op + worn.length })) : [])];
+      // fractional sizes are the plan itself (each level says so); other notes are passed on
+      for (const c of cautions) if (c.code !== 'fractional-size') caution(`Step ${c.op + 1}: ${c.message}`);
+      after = measureGirths(asWorn.pattern, 'after the plan', opts.seamAllowance);
     } catch (e) {
       caution(`The planned changes could not all be made on this pattern: ${e instanceof Error ? e.message : String(e)}`);
     }
