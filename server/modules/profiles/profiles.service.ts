@@ -22,11 +22,17 @@ export class ProfilesService {
     return this.repo.find({ where: { ownerId }, order: { name: 'ASC' }, take: 200 });
   }
 
-  /** 404 when missing, 403 when it is someone else's; with its dated history, newest first. */
-  async get(ownerId: string, id: string): Promise<ProfileWithHistory> {
+  /** 404 when missing, 403 when it is someone else's. */
+  private async owned(ownerId: string, id: string): Promise<ProfileEntity> {
     const profile = await this.repo.findOneBy({ id });
     if (!profile) throw notFound('This profile');
     if (profile.ownerId !== ownerId) throw forbidden('This profile belongs to someone else.');
+    return profile;
+  }
+
+  /** The profile with its dated history, newest first (404 / 403 as `owned`). */
+  async get(ownerId: string, id: string): Promise<ProfileWithHistory> {
+    const profile = await this.owned(ownerId, id);
     return Object.assign(profile, { history: await this.history(this.db.manager, id) });
   }
 
@@ -50,11 +56,12 @@ export class ProfilesService {
 
   /** Rename, and/or append a dated set (what is not sent is copied from the current set). */
   async update(ownerId: string, id: string, input: UpdateProfileInput): Promise<ProfileWithHistory> {
-    const profile = await this.get(ownerId, id);
+    await this.owned(ownerId, id);
     await this.db.transaction(async (m) => {
       const repo = m.getRepository(ProfileEntity);
-      // lock the row so two saves append in turn and the mirror ends on the newest set
-      await repo.createQueryBuilder('p').setLock('pessimistic_write').where('p.id = :id', { id }).getOne();
+      // read under a row lock, so two saves append in turn and each copies the set the other left
+      const profile = await repo.createQueryBuilder('p').setLock('pessimistic_write').where('p.id = :id', { id }).getOne();
+      if (!profile) throw notFound('This profile'); // deleted meanwhile
       if (input.measurements !== undefined || input.girthsAtHeights !== undefined) {
         await m.getRepository(ProfileMeasurementSetEntity).insert({
           profileId: id,
@@ -69,14 +76,13 @@ export class ProfilesService {
         profile.takenOn = current!.takenOn;
       }
       if (input.name !== undefined) profile.name = input.name;
-      const { history: _history, ...columns } = profile;
-      await repo.save(repo.create(columns));
+      await repo.save(profile);
     });
     return this.get(ownerId, id);
   }
 
   async remove(ownerId: string, id: string): Promise<void> {
-    await this.get(ownerId, id);
+    await this.owned(ownerId, id);
     await this.repo.delete({ id });
   }
 }
