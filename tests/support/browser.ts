@@ -75,8 +75,11 @@ export function useBrowserSession(): BrowserSession {
     await app?.close();
     if (profileDir) await rm(profileDir, { recursive: true, force: true });
   });
-  // Each test starts signed out, whatever the one before it left behind.
+  // Each test starts signed out, whatever the one before it left behind. The page leaves the
+  // app first: a request the last test's page still had in flight could otherwise answer after
+  // the cookies are cleared and set the (rolling) session cookie again.
   beforeEach(async () => {
+    await page?.goto('about:blank');
     await context?.clearCookies();
   });
   const ready = <T>(value: T | undefined): T => {
