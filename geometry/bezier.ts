@@ -3,7 +3,7 @@
  * `length` is always arc length in mm.
  */
 import { FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
-import { type Point, vecCross, vecDistance, vecDot, vecLength, vecLerp, vecSub } from './vec.ts';
+import { type Point, vecCross, vecDistance, vecDot, vecHypot, vecLength, vecLerp, vecSub } from './vec.ts';
 
 /** A cubic Bézier: start, first control, second control, end. */
 export type Cubic = readonly [Point, Point, Point, Point];
@@ -285,7 +285,7 @@ export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
 const FLATTEN_STACK = new Float64Array(10 * 22);
 const FLATTEN_DEPTHS = new Int32Array(22);
 
-/** cubicFlatness(c) <= tolerance, decided without Math.hypot unless the squares are too close to call. */
+/** cubicFlatness(c) <= tolerance, decided without the root unless the squares are too close to call. */
 function flatWithin(x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, tolerance: number, tol2: number): boolean {
   return pointNearChord(x1, y1, x0, y0, x3, y3, tolerance, tol2) && pointNearChord(x2, y2, x0, y0, x3, y3, tolerance, tol2);
 }
@@ -309,7 +309,7 @@ function pointNearChord(px: number, py: number, ax: number, ay: number, bx: numb
   // the squared sum differs from hypot² by a few ulps at most: decide directly away from the boundary
   if (d2 < tol2 * (1 - 1e-9)) return true;
   if (d2 > tol2 * (1 + 1e-9)) return false;
-  return Math.hypot(dx, dy) <= tolerance;
+  return vecHypot(dx, dy) <= tolerance;
 }
 
 /** The polyline of cubicFlattenTimes as points (first = c[0], last = c[3]). */
@@ -535,7 +535,7 @@ export function cubicNearestTime(c: Cubic, p: Point): number {
   for (let i = 0; i <= n; i++) {
     const t = i / n;
     // the squared distance from cubicPoint(c, t) to p, cubicPoint's arithmetic inline (the
-    // nearest sample is the same by squares; Math.hypot is only taken for the winner)
+    // nearest sample is the same by squares; the root is only taken for the winner)
     const mt = 1 - t;
     const a = mt * mt * mt;
     const b = 3 * mt * mt * t;

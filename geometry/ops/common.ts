@@ -18,7 +18,7 @@ import {
 } from '../path.ts';
 import { PARAM_EPSILON, REDRAW_CHECKS, REDRAW_TOLERANCE, SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
 import { type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, outlineContour, orderedOutlines } from '../model.ts';
-import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecNormalize, vecSub } from '../vec.ts';
+import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecHypot, vecNormalize, vecSub } from '../vec.ts';
 
 /** Something the person should know about a result (an estimate, a large change, …). */
 export interface Caution {
@@ -309,7 +309,7 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
     const { from: p0, c1: p1, c2: p2, to: p3 } = seg;
     for (let i = k + 1; i < m; i++) {
       // vecDistance(cubicPoint(seg, u), q[i]) > mergeTolerance, with cubicPoint's arithmetic
-      // inline and Math.hypot only when the squared distance is too close to call
+      // inline and the root only when the squared distance is too close to call
       const u = (cum[i]! - cum[k]!) / len;
       const mu = 1 - u;
       const a = mu * mu * mu;
@@ -319,7 +319,7 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
       const dx = a * p0.x + b * p1.x + c * p2.x + e * p3.x - q[i]!.x;
       const dy = a * p0.y + b * p1.y + c * p2.y + e * p3.y - q[i]!.y;
       const d2 = dx * dx + dy * dy;
-      if (d2 > tol2 * (1 + 1e-9) || (d2 >= tol2 * (1 - 1e-9) && Math.hypot(dx, dy) > mergeTolerance)) return undefined;
+      if (d2 > tol2 * (1 + 1e-9) || (d2 >= tol2 * (1 - 1e-9) && vecHypot(dx, dy) > mergeTolerance)) return undefined;
     }
     return seg;
   };

@@ -24,7 +24,7 @@ import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
 import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
-import { type Point, vecAdd, vecCross, vecDistance, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
+import { type Point, vecAdd, vecCross, vecDistance, vecHypot, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
 /** Widths below this (mm) are taken as no allowance: a thinner band is below cutting precision and only adds round-off slivers. */
@@ -258,7 +258,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
     for (let i = 1; i < pts.length; i++) {
       const a = pts[i - 1]!;
       const b = pts[i]!;
-      const l = Math.hypot(b.x - a.x, b.y - a.y);
+      const l = vecHypot(b.x - a.x, b.y - a.y);
       total += l;
       if (!(l > 1e-9)) continue;
       px[k] = a.x;
@@ -311,7 +311,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
     let sA: number; // along A from the corner
     let sB: number; // along B from chord j's start
     if (Math.abs(sin) < 1e-9) {
-      if (cos < 0 || Math.abs(wi - wj) > 1e-12 || Math.hypot(ox, oy) > 1e-9) return false;
+      if (cos < 0 || Math.abs(wi - wj) > 1e-12 || vecHypot(ox, oy) > 1e-9) return false;
       sA = 0;
       sB = 0;
     } else {
@@ -326,7 +326,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       if (between) {
         const mx = wi * nix + sA * dx[i]!;
         const my = wi * niy + sA * dy[i]!;
-        if (Math.hypot(mx, my) > MITRE_LIMIT * Math.max(wi, wj)) return false; // bevelled
+        if (vecHypot(mx, my) > MITRE_LIMIT * Math.max(wi, wj)) return false; // bevelled
         // each band's end overlap must stay inside the mitre (or stick out by a negligible sliver)
         if (sA < END_OVERLAP && (sA < 0 || (END_OVERLAP - sA) * sin > OVERLAP_SLACK)) return false;
         if (-sB < END_OVERLAP && (-sB < 0 || (END_OVERLAP + sB) * sin > OVERLAP_SLACK)) return false;

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -406,6 +406,25 @@ describe('distance tests on squares (hypotAbove)', () => {
         expect(hypotAbove(dx, dy, l)).toBe(Math.hypot(dx, dy) > l);
       }),
       { numRuns: 20000 },
+    );
+  });
+});
+
+describe('vecHypot (two-number hypot without an argument array)', () => {
+  // Reference: the engine's own Math.hypot (ECMAScript built-in). Node runs V8, whose algorithm
+  // vecHypot follows, so the two must agree to the last bit, signs of zero, NaN and ∞ included.
+  it('gives Math.hypot(dx, dy) exactly, for any two numbers', () => {
+    const any = fc.oneof(
+      fc.double({ noNaN: false }),
+      fc.double({ min: -2000, max: 2000, noNaN: true }),
+      fc.double({ min: -1e-300, max: 1e-300, noNaN: true }),
+      fc.constantFrom(0, -0, Infinity, -Infinity, NaN, Number.MIN_VALUE, Number.MAX_VALUE, 3, 4),
+    );
+    fc.assert(
+      fc.property(any, any, (dx, dy) => {
+        expect(Object.is(vecHypot(dx, dy), Math.hypot(dx, dy))).toBe(true);
+      }),
+      { numRuns: 50000 },
     );
   });
 });
