@@ -30,6 +30,7 @@ import {
   vecCross,
   vecDistance,
   vecDot,
+  vecHypot,
   vecLerp,
   vecNormalize,
   vecSub,
@@ -147,7 +148,7 @@ export function segmentLineIntersections(s: Segment, origin: Point, direction: P
     const dx = s.to.x - s.from.x;
     const dy = s.to.y - s.from.y;
     const den = dx * direction.y - dy * direction.x;
-    if (Math.abs(den) < 1e-12 * Math.max(1, Math.hypot(dx, dy) * Math.hypot(direction.x, direction.y))) return [];
+    if (Math.abs(den) < 1e-12 * Math.max(1, vecHypot(dx, dy) * vecHypot(direction.x, direction.y))) return [];
     const t = ((origin.x - s.from.x) * direction.y - (origin.y - s.from.y) * direction.x) / den;
     return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
   }
@@ -267,8 +268,8 @@ function readPath(d: string): Path {
 }
 
 /**
- * Math.hypot(dx, dy) > limit (limit ≥ 0), decided on the squares unless they are too close to
- * call, then by Math.hypot itself: the squared sum is within a few ulps of hypot², so away
+ * vecHypot(dx, dy) > limit (limit ≥ 0), decided on the squares unless they are too close to
+ * call, then by vecHypot itself: the squared sum is within a few ulps of hypot², so away
  * from a 1e-9 relative band the two decide alike (non-finite values and underflow fall into
  * the band or decide alike too).
  */
@@ -277,7 +278,7 @@ export function hypotAbove(dx: number, dy: number, limit: number): boolean {
   const l2 = limit * limit;
   if (d2 > l2 * (1 + 1e-9)) return true;
   if (d2 < l2 * (1 - 1e-9)) return false;
-  return Math.hypot(dx, dy) > limit;
+  return vecHypot(dx, dy) > limit;
 }
 
 /**
@@ -848,7 +849,7 @@ export function contourFlatPerimeter(c: Contour, tolerance = FLATNESS): number {
   let pending = 0;
   const visit = (x: number, y: number): void => {
     if (count > 1) total += pending;
-    pending = Math.hypot(lx - x, ly - y);
+    pending = vecHypot(lx - x, ly - y);
     bx = lx;
     by = ly;
     lx = x;
@@ -867,9 +868,9 @@ export function contourFlatPerimeter(c: Contour, tolerance = FLATNESS): number {
     for (let k = 1; k < xs.length; k++) visit(xs[k]!, ys[k]!);
   }
   // contourFlatPoints leaves out a closed contour's last point: its chord goes, the one before closes
-  if (c.closed && count > 1) return total + Math.hypot(bx - x0, by - y0);
+  if (c.closed && count > 1) return total + vecHypot(bx - x0, by - y0);
   if (count > 1) total += pending;
-  return total + Math.hypot(lx - x0, ly - y0);
+  return total + vecHypot(lx - x0, ly - y0);
 }
 
 /**
@@ -995,7 +996,7 @@ function segmentsIntersect(a: Point, b: Point, c: Point, d: Point): Point | null
   const qp = vecSub(c, a);
   if (Math.abs(den) < 1e-15) {
     // parallel: overlapping collinear pieces count as touching
-    if (Math.abs(vecCross(qp, r)) > 1e-9 * Math.max(1, Math.hypot(r.x, r.y))) return null;
+    if (Math.abs(vecCross(qp, r)) > 1e-9 * Math.max(1, vecHypot(r.x, r.y))) return null;
     const rr = vecDot(r, r);
     if (rr === 0) return null;
     const t0 = vecDot(qp, r) / rr;
@@ -1128,7 +1129,7 @@ function segmentsMeet(ax: number, ay: number, bx: number, by: number, cx: number
   const qx = cx - ax;
   const qy = cy - ay;
   if (Math.abs(den) < 1e-15) {
-    if (Math.abs(qx * ry - qy * rx) > 1e-9 * Math.max(1, Math.hypot(rx, ry))) return false;
+    if (Math.abs(qx * ry - qy * rx) > 1e-9 * Math.max(1, vecHypot(rx, ry))) return false;
     const rr = rx * rx + ry * ry;
     if (rr === 0) return false;
     const t0 = (qx * rx + qy * ry) / rr;
