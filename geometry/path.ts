@@ -528,25 +528,128 @@ export function pathToSvg(path: Path, decimals = 4): string {
   return writePath(path, decimals);
 }
 
+/**
+ * The text pathToSvg prints: absolute M/L/C/Z commands, parts separated by one space, each
+ * number as fmt prints it. Written as character codes into one growing scratch array and made
+ * into a string once, instead of a string per number and per part joined at the end (the
+ * printing of a replayed stack's results was a tenth of its time, most of it in those strings).
+ */
 function writePath(path: Path, decimals: number): string {
-  const parts: string[] = [];
+  const w = TEXT;
+  w.length = 0;
   for (const c of path) {
     const segs = c.segments;
     if (segs.length === 0) continue;
-    parts.push('M' + fmtPoint(segs[0]!.from, decimals));
+    if (w.length > 0) w.code(SPACE);
+    w.code(CHAR_M);
+    w.point(segs[0]!.from, decimals);
     for (let i = 0; i < segs.length; i++) {
       const s = segs[i]!;
       if (c.closed && i === segs.length - 1 && s.kind === 'line') continue; // Z draws it
-      parts.push(s.kind === 'line' ? 'L' + fmtPoint(s.to, decimals) : 'C' + fmtPoint(s.c1, decimals) + ' ' + fmtPoint(s.c2, decimals) + ' ' + fmtPoint(s.to, decimals));
+      w.code(SPACE);
+      if (s.kind === 'line') {
+        w.code(CHAR_L);
+        w.point(s.to, decimals);
+      } else {
+        w.code(CHAR_C);
+        w.point(s.c1, decimals);
+        w.code(SPACE);
+        w.point(s.c2, decimals);
+        w.code(SPACE);
+        w.point(s.to, decimals);
+      }
     }
-    if (c.closed) parts.push('Z');
+    if (c.closed) {
+      w.code(SPACE);
+      w.code(CHAR_Z);
+    }
   }
-  return parts.join(' ');
+  return w.text();
 }
 
-function fmtPoint(q: Point, decimals: number): string {
-  return fmt(q.x, decimals) + ' ' + fmt(q.y, decimals);
+const SPACE = 0x20;
+const CHAR_M = 0x4d;
+const CHAR_L = 0x4c;
+const CHAR_C = 0x43;
+const CHAR_Z = 0x5a;
+const CHAR_0 = 0x30;
+const CHAR_MINUS = 0x2d;
+const CHAR_DOT = 0x2e;
+
+/** Character codes of path text being written (ASCII only), reused from one path to the next. */
+class TextWriter {
+  codes = new Uint8Array(4096);
+  length = 0;
+
+  code(c: number): void {
+    if (this.length === this.codes.length) this.grow();
+    this.codes[this.length++] = c;
+  }
+
+  private grow(): void {
+    const bigger = new Uint8Array(this.codes.length * 2);
+    bigger.set(this.codes);
+    this.codes = bigger;
+  }
+
+  point(q: Point, decimals: number): void {
+    this.number(q.x, decimals);
+    this.code(SPACE);
+    this.number(q.y, decimals);
+  }
+
+  /** fmt(v, decimals), written digit by digit where fmt takes its fast form, else fmt's text. */
+  number(v: number, decimals: number): void {
+    const k = POW10[decimals] ?? 10 ** decimals;
+    const n = Math.round(v * k);
+    if (n === 0) {
+      this.code(CHAR_0);
+      return;
+    }
+    if (!(decimals <= 6 && Math.abs(n) < k * 1e6)) {
+      const text = fmt(v, decimals);
+      for (let i = 0; i < text.length; i++) this.code(text.charCodeAt(i));
+      return;
+    }
+    // as fmt: the integer part and the decimals of |n| / k as integers, trailing zeros dropped
+    const a = Math.abs(n);
+    if (n < 0) this.code(CHAR_MINUS);
+    const whole = Math.floor(a / k);
+    this.digits(whole, 1);
+    let part = a - whole * k;
+    if (part === 0) return;
+    let places = decimals;
+    while (part % 10 === 0) {
+      part /= 10;
+      places--;
+    }
+    this.code(CHAR_DOT);
+    this.digits(part, places);
+  }
+
+  /** The decimal digits of a non-negative integer below 2^53, zero-padded on the left to `width`. */
+  private digits(value: number, width: number): void {
+    let count = 1;
+    for (let p = 10; p <= value; p *= 10) count++;
+    if (count < width) count = width;
+    if (this.length + count > this.codes.length) this.grow();
+    let v = value;
+    for (let i = this.length + count - 1; i >= this.length; i--) {
+      const q = Math.floor(v / 10);
+      this.codes[i] = CHAR_0 + (v - q * 10);
+      v = q;
+    }
+    this.length += count;
+  }
+
+  /** The text written so far: ASCII codes read as UTF-8 are the same characters; decoding them is one fast call. */
+  text(): string {
+    return ASCII.decode(this.codes.subarray(0, this.length));
+  }
 }
+/** UTF-8 TextDecoder (WHATWG Encoding; in every browser and in Node), typed here: geometry/ compiles without DOM or Node types. */
+const ASCII = new (globalThis as unknown as { TextDecoder: new () => { decode(input: Uint8Array): string } }).TextDecoder();
+const TEXT = new TextWriter();
 
 // ------------------------------------------------------- deferred writing (applyOps)
 

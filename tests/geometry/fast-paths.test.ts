@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -133,6 +133,52 @@ describe('pathToSvg numbers (fast decimal printing)', () => {
         if (back) expectPointNear(back.segments[0]!.from, { x: Math.round(x * k) / k, y: Math.round(y * k) / k }, 1e-9);
       }),
       { numRuns: 2000 },
+    );
+  });
+});
+
+describe('pathToSvg text (written as character codes)', () => {
+  it('is the plain text: M, L, C and Z parts joined by spaces, each number as String() prints it rounded', () => {
+    const value = fc.oneof(
+      fc.double({ min: -2000, max: 2000, noNaN: true }),
+      fc.double({ min: -1e12, max: 1e12, noNaN: true }), // past the fast form: String() itself
+      fc.double({ min: -1e-5, max: 1e-5, noNaN: true }),
+      fc.constantFrom(0, -0, 5e-7, -5e-7, 999999.99995, -999999.99995, 1e6),
+    );
+    const pt = fc.record({ x: value, y: value });
+    const segment = fc.oneof(fc.record({ kind: fc.constant('line' as const), to: pt }), fc.record({ kind: fc.constant('cubic' as const), c1: pt, c2: pt, to: pt }));
+    // up to 600 segments: the longest texts outgrow the writer's first 4096 codes
+    const contour = fc.record({ closed: fc.boolean(), start: pt, segs: fc.array(segment, { maxLength: 600 }) });
+    fc.assert(
+      fc.property(fc.array(contour, { maxLength: 4 }), fc.constantFrom(0, 2, 4, 6), (contours, decimals) => {
+        const path: Path = contours.map((c) => {
+          let from = c.start;
+          const segments: Segment[] = c.segs.map((s) => {
+            const seg: Segment = s.kind === 'line' ? { kind: 'line', from, to: s.to } : { kind: 'cubic', from, c1: s.c1, c2: s.c2, to: s.to };
+            from = s.to;
+            return seg;
+          });
+          return { closed: c.closed, segments };
+        });
+        const k = 10 ** decimals;
+        const plain = (v: number): string => {
+          const r = Math.round(v * k) / k;
+          return r === 0 ? '0' : String(r);
+        };
+        const p2 = (q: Point): string => `${plain(q.x)} ${plain(q.y)}`;
+        const parts: string[] = [];
+        for (const c of path) {
+          if (c.segments.length === 0) continue;
+          parts.push(`M${p2(c.segments[0]!.from)}`);
+          c.segments.forEach((s, i) => {
+            if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return;
+            parts.push(s.kind === 'line' ? `L${p2(s.to)}` : `C${p2(s.c1)} ${p2(s.c2)} ${p2(s.to)}`);
+          });
+          if (c.closed) parts.push('Z');
+        }
+        expect(pathToSvg(path, decimals)).toBe(parts.join(' '));
+      }),
+      { numRuns: 300 },
     );
   });
 });
