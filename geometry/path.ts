@@ -666,6 +666,13 @@ interface DeferredRun {
   readonly texts: Map<string, { readonly path: Path; readonly decimals: number; read: Path | undefined }>;
   /** Placeholders handed out so far (the number in the next one; entries may have been dropped by `retain`). */
   issued: number;
+  /**
+   * Flattenings of cubics first flattened during the run (see cubicFlattening). Dropped at its
+   * end but for the cubics of the run's input, which the next run on the same input meets again.
+   */
+  flattenings: Map<Segment, CubicFlattening[]>;
+  /** The run's flattenings before the last `retain` (between operations): found again, an entry moves back. */
+  flatteningsBefore: Map<Segment, CubicFlattening[]>;
 }
 let deferred: DeferredRun | undefined;
 let deferredRuns = 0;
@@ -683,7 +690,7 @@ const DEFERRED_PREFIX = '\u0000path:';
  */
 export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string, retain: (inUse: readonly string[]) => void) => T): T {
   if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d, () => {});
-  const run: DeferredRun = { run: ++deferredRuns, texts: new Map(), issued: 0 };
+  const run: DeferredRun = { run: ++deferredRuns, texts: new Map(), issued: 0, flattenings: new Map(), flatteningsBefore: new Map() };
   deferred = run;
   try {
     return body(
@@ -692,6 +699,8 @@ export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d
         return entry ? writePath(entry.path, entry.decimals) : d;
       },
       (inUse) => {
+        run.flatteningsBefore = run.flattenings;
+        run.flattenings = new Map();
         if (run.texts.size === 0) return;
         const used = new Set(inUse);
         for (const token of run.texts.keys()) if (!used.has(token)) run.texts.delete(token);
@@ -699,6 +708,23 @@ export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d
     );
   } finally {
     deferred = undefined;
+    keepInputFlattenings(texts, run.flattenings);
+    keepInputFlattenings(texts, run.flatteningsBefore);
+  }
+}
+
+/** Move the flattenings a run made of its input's cubics (the parsed texts it was given) to the lasting memo. */
+function keepInputFlattenings(texts: readonly string[], flattenings: Map<Segment, CubicFlattening[]>): void {
+  if (flattenings.size === 0) return;
+  for (const d of texts) {
+    const path = PARSE_CACHE.get(d);
+    if (!path) continue;
+    for (const c of path)
+      for (const s of c.segments) {
+        if (s.kind !== 'cubic') continue;
+        const kept = flattenings.get(s);
+        if (kept) rememberFlattenings(s, kept);
+      }
   }
 }
 
@@ -1023,12 +1049,24 @@ interface CubicFlattening {
  * CUBIC_FLATTEN_GENERATION cubics and the one before it (a cubic found in the older one moves
  * to the newer). A Map, not a WeakMap: setting a key in a WeakMap cost about 1 µs and work for
  * the garbage collector (a tenth of the stack's time); a Map costs about half, and the bound
- * keeps what it holds to a few thousand flattenings. Which entries are kept changes only the
- * speed: a flattening made again is the same.
+ * keeps what it holds to a few thousand flattenings. During a replay (pathTextDeferred), cubics
+ * not yet in it go to a memo of the run instead, which ends with the run but for the cubics of
+ * the run's input: the intermediate results of a replay are garbage once it ends, and keeping
+ * their flattenings for the next few thousand cubics made the garbage collector copy them and
+ * move them to the old generation (most of what survived a young collection). Which entries are
+ * kept changes only the speed: a flattening made again is the same.
  */
 let CUBIC_FLATTEN_CACHE = new Map<Segment, CubicFlattening[]>();
 let CUBIC_FLATTEN_OLDER = new Map<Segment, CubicFlattening[]>();
 const CUBIC_FLATTEN_GENERATION = 2048;
+
+function rememberFlattenings(s: Segment, kept: CubicFlattening[]): void {
+  if (CUBIC_FLATTEN_CACHE.size >= CUBIC_FLATTEN_GENERATION) {
+    CUBIC_FLATTEN_OLDER = CUBIC_FLATTEN_CACHE;
+    CUBIC_FLATTEN_CACHE = new Map();
+  }
+  CUBIC_FLATTEN_CACHE.set(s, kept);
+}
 
 /** The most tolerances kept per cubic (the oldest is dropped). */
 const CUBIC_FLATTEN_KEEP = 3;
@@ -1036,12 +1074,20 @@ const CUBIC_FLATTEN_KEEP = 3;
 function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
   let kept = CUBIC_FLATTEN_CACHE.get(s);
   if (!kept) {
-    kept = CUBIC_FLATTEN_OLDER.get(s) ?? [];
-    if (CUBIC_FLATTEN_CACHE.size >= CUBIC_FLATTEN_GENERATION) {
-      CUBIC_FLATTEN_OLDER = CUBIC_FLATTEN_CACHE;
-      CUBIC_FLATTEN_CACHE = new Map();
+    const local = deferred?.flattenings;
+    kept = local?.get(s);
+    if (!kept && deferred) {
+      kept = deferred.flatteningsBefore.get(s);
+      if (kept) local!.set(s, kept);
     }
-    CUBIC_FLATTEN_CACHE.set(s, kept);
+    if (!kept) {
+      const older = CUBIC_FLATTEN_OLDER.get(s);
+      kept = older ?? [];
+      // a cubic new to a replay (applyOps) is most likely one of its intermediate results: its
+      // flattenings stay with the run and die with it (see keepInputFlattenings)
+      if (local && !older) local.set(s, kept);
+      else rememberFlattenings(s, kept);
+    }
   }
   for (const f of kept) if (f.tolerance === tolerance) return f;
   const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
