@@ -518,6 +518,15 @@ function fmt(v: number, decimals: number): string {
 const ZEROS = ['', '0', '00', '000', '0000', '00000', '000000'];
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
+/**
+ * pathToSvg's text printed at once, also during a replay: for a result that no later step of a
+ * replay is likely to read again (a cut line), whose text is smaller than its path objects,
+ * which would otherwise stay alive (and be copied by the garbage collector) until the end.
+ */
+export function pathToSvgNow(path: Path, decimals = 4): string {
+  return writePath(path, decimals);
+}
+
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
 export function pathToSvg(path: Path, decimals = 4): string {
   if (deferred && allFinite(path, decimals)) {

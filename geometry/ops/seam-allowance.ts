@@ -23,7 +23,7 @@ import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
-import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
+import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvgNow } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecHypot, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
@@ -567,7 +567,7 @@ export function performSeamAllowance(pattern: Pattern, op: SeamAllowanceOp): OpR
       outlines: piece.outlines.map((o) => {
         const { cut, simple } = cutLineChecked(piece, o, op);
         if (!simple) assertSimple(cut, `seam allowance of piece "${piece.name}" size "${o.size}"`);
-        return { ...o, cut: pathToSvg([cut], 4) };
+        return { ...o, cut: pathToSvgNow([cut], 4) };
       }),
     };
   });
