@@ -422,14 +422,17 @@ const ROOT_RESIDUAL = 1e-9;
  * direction `direction`, sorted. Degenerate: a zero direction gives []; a cubic lying on the
  * line gives [] (no transversal crossing).
  */
-export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
+export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): readonly number[] {
   return cubicPointsLineIntersections(c[0], c[1], c[2], c[3], origin, direction);
 }
 
+/** No parameters: one shared, frozen empty list (most segments meet most lines nowhere; read-only, so it is never changed). */
+export const NO_TIMES: readonly number[] = Object.freeze([]);
+
 /** cubicLineIntersections of the cubic with control points p0…p3 (no tuple needed). */
-export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3: Point, origin: Point, direction: Point): number[] {
+export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3: Point, origin: Point, direction: Point): readonly number[] {
   const dl = vecLength(direction);
-  if (dl < POINT_EPSILON) return [];
+  if (dl < POINT_EPSILON) return NO_TIMES;
   const nx = -direction.y / dl;
   const ny = direction.x / dl;
   const ox = origin.x;
@@ -439,7 +442,7 @@ export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3
   const s2 = nx * (p2.x - ox) + ny * (p2.y - oy);
   const s3 = nx * (p3.x - ox) + ny * (p3.y - oy);
   const sMax = Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3));
-  if (sMax < POINT_EPSILON) return [];
+  if (sMax < POINT_EPSILON) return NO_TIMES;
   // All four control points clearly on one side of the line: no root can be accepted. On [0, 1]
   // the curve's distance is a convex combination of s0…s3, so |f| ≥ m (m: the smallest |s_i|,
   // all of one sign); on the PARAM_EPSILON margins it falls by at most 1e-9 · 54·sMax (|f′| ≤
@@ -447,7 +450,7 @@ export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3
   // cubicRootsInto accepts a root only where |f| ≤ ROOT_RESIDUAL (1e-9) · its coefficients'
   // scale (≤ 12·sMax) · (1 + 1e-9)³: the full search would return [] as well.
   const m = 1e-6 * sMax;
-  if ((s0 > m && s1 > m && s2 > m && s3 > m) || (s0 < -m && s1 < -m && s2 < -m && s3 < -m)) return [];
+  if ((s0 > m && s1 > m && s2 > m && s3 > m) || (s0 < -m && s1 < -m && s2 < -m && s3 < -m)) return NO_TIMES;
   // Bernstein → power basis.
   const a = -s0 + 3 * s1 - 3 * s2 + s3;
   const b = 3 * s0 - 6 * s1 + 3 * s2;

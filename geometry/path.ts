@@ -18,6 +18,7 @@ import {
   cubicSplit,
   cubicTangent,
   cubicTimeAtLength,
+  NO_TIMES,
   quadraticToCubic,
   solveQuadratic,
 } from './bezier.ts';
@@ -142,15 +143,15 @@ export function segmentMapPoints(s: Segment, f: (p: Point) => Point): Segment {
 }
 
 /** Parameters where the segment meets an infinite line, sorted. */
-export function segmentLineIntersections(s: Segment, origin: Point, direction: Point): number[] {
+export function segmentLineIntersections(s: Segment, origin: Point, direction: Point): readonly number[] {
   if (s.kind === 'line') {
     // vecSub and vecCross written out (the same arithmetic in the same order, without the objects)
     const dx = s.to.x - s.from.x;
     const dy = s.to.y - s.from.y;
     const den = dx * direction.y - dy * direction.x;
-    if (Math.abs(den) < 1e-12 * Math.max(1, vecHypot(dx, dy) * vecHypot(direction.x, direction.y))) return [];
+    if (Math.abs(den) < 1e-12 * Math.max(1, vecHypot(dx, dy) * vecHypot(direction.x, direction.y))) return NO_TIMES;
     const t = ((origin.x - s.from.x) * direction.y - (origin.y - s.from.y) * direction.x) / den;
-    return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
+    return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : NO_TIMES;
   }
   return cubicPointsLineIntersections(s.from, s.c1, s.c2, s.to, origin, direction);
 }
@@ -905,7 +906,11 @@ export function contourExtremePoints(c: Contour, direction: Point): Point[] {
       const a0 = (s.c1.x - s.from.x) * direction.x + (s.c1.y - s.from.y) * direction.y;
       const a1 = (s.c2.x - s.c1.x) * direction.x + (s.c2.y - s.c1.y) * direction.y;
       const a2 = (s.to.x - s.c2.x) * direction.x + (s.to.y - s.c2.y) * direction.y;
-      for (const t of solveQuadratic(a0 - 2 * a1 + a2, 2 * (a1 - a0), a0)) if (t > 0 && t < 1) out.push(cubicPoint([s.from, s.c1, s.c2, s.to], t));
+      const roots = solveQuadratic(a0 - 2 * a1 + a2, 2 * (a1 - a0), a0);
+      for (let k = 0; k < roots.length; k++) {
+        const t = roots[k]!;
+        if (t > 0 && t < 1) out.push(cubicPoint([s.from, s.c1, s.c2, s.to], t));
+      }
     }
     out.push(s.to);
   }

@@ -128,15 +128,18 @@ export function bandMapSegment(m: BandMap, s: Segment): Segment[] {
 }
 
 /** Where a segment meets each cut line, per cut line (`origins`: m.lineAt of each break, when the caller has them). */
-function cutsOf(m: BandMap, s: Segment, origins: readonly Point[] = m.breaks.map((b) => m.lineAt(b))): number[][] {
-  const out: number[][] = [];
+function cutsOf(m: BandMap, s: Segment, origins: readonly Point[] = m.breaks.map((b) => m.lineAt(b))): (readonly number[])[] {
+  const out: (readonly number[])[] = [];
   for (let i = 0; i < origins.length; i++) out.push(segmentLineIntersections(s, origins[i]!, m.direction));
   return out;
 }
 
 function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
   const ts: number[] = [];
-  for (const c of cuts) ts.push(...c);
+  for (let i = 0; i < cuts.length; i++) {
+    const c = cuts[i]!;
+    for (let k = 0; k < c.length; k++) ts.push(c[k]!);
+  }
   // A part in an identity band is handed back as it is: the identity moves no number (it only
   // turns −0 into 0, which prints and reads back the same), and an unsplit segment that stays
   // the very same object keeps its flattenings for the next check or operation.
@@ -152,16 +155,20 @@ export function bandMapPath(m: BandMap, path: Path): Path {
   // a segment no cut line splits (no time strictly inside by more than PARAM_EPSILON, so
   // segmentSplitAt hands it back whole) keeps the map of its band, found once for both too
   const origins = m.breaks.map((b) => m.lineAt(b));
-  const cuts: (number[][] | undefined)[][] = [];
+  const cuts: ((readonly number[])[] | undefined)[][] = [];
   const whole: (Affine | undefined)[][] = [];
   let untouched = true;
-  for (const c of path) {
-    const cc: (number[][] | undefined)[] = [];
+  for (let ci = 0; ci < path.length; ci++) {
+    const c = path[ci]!;
+    const cc: ((readonly number[])[] | undefined)[] = [];
     const cw: (Affine | undefined)[] = [];
     for (const s of c.segments) {
       const ts = cutsOf(m, s, origins);
       let split = false;
-      for (const list of ts) for (const t of list) if (t > PARAM_EPSILON && t < 1 - PARAM_EPSILON) split = true;
+      for (let i = 0; i < ts.length; i++) {
+        const list = ts[i]!;
+        for (let k = 0; k < list.length; k++) if (list[k]! > PARAM_EPSILON && list[k]! < 1 - PARAM_EPSILON) split = true;
+      }
       if (split) {
         untouched = false;
         cc.push(ts);
@@ -184,8 +191,10 @@ export function bandMapPath(m: BandMap, path: Path): Path {
     for (let si = 0; si < c.segments.length; si++) {
       const s = c.segments[si]!;
       const map = cw[si];
-      if (map === undefined) segments.push(...mapSegmentAt(m, s, cc[si]!));
-      else segments.push(map === AFFINE_IDENTITY ? s : segmentTransform(s, map));
+      if (map === undefined) {
+        const parts = mapSegmentAt(m, s, cc[si]!);
+        for (let k = 0; k < parts.length; k++) segments.push(parts[k]!);
+      } else segments.push(map === AFFINE_IDENTITY ? s : segmentTransform(s, map));
     }
     return { closed: c.closed, segments };
   });
@@ -487,7 +496,11 @@ function fitSpan(s: Segment, ta: number, tb: number, a: MappedEnd, b: MappedEnd,
  */
 export function segmentCutTimes(s: Segment, lines: readonly { readonly origin: Point; readonly direction: Point }[]): number[] {
   const ts: number[] = [];
-  for (const l of lines) for (const t of segmentLineIntersections(s, l.origin, l.direction)) if (t > PARAM_EPSILON && t < 1 - PARAM_EPSILON) ts.push(t);
+  for (let i = 0; i < lines.length; i++) {
+    const l = lines[i]!;
+    const found = segmentLineIntersections(s, l.origin, l.direction);
+    for (let k = 0; k < found.length; k++) if (found[k]! > PARAM_EPSILON && found[k]! < 1 - PARAM_EPSILON) ts.push(found[k]!);
+  }
   if (ts.length < 2) return ts;
   ts.sort((p, q) => p - q);
   const out = [ts[0]!];

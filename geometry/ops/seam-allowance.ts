@@ -387,11 +387,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   // the join points of the chords kept, in order (a list of its final size)
   const out = new Array<Point>(kept);
   for (let i = 0, o = 0; i < n; i++) if (prev[i] !== -1) out[o++] = { x: jx[i]!, y: jy[i]! };
-  const runEnds = (i: number) => ({
-    first: !closedRun && run[i === 0 ? n - 1 : i - 1] !== run[i],
-    last: !closedRun && run[i + 1 === n ? 0 : i + 1] !== run[i],
-  });
-  if (!innerHalvesInside(out, n, px, py, dx, dy, len, wd, runEnds)) return undefined;
+  if (!innerHalvesInside(out, n, px, py, dx, dy, len, wd, closedRun ? undefined : run)) return undefined;
   // `out[i]` joins chord i to chord i + 1; the polygon runs through them in order
   const cut = contourFromPoints(out, true);
   if (!contourIsSimple(cut) || contourSignedArea(cut) <= 0) return undefined;
@@ -430,7 +426,8 @@ function innerHalvesInside(
   dy: Float64Array,
   len: Float64Array,
   wd: Float64Array,
-  runEnds: (i: number) => { first: boolean; last: boolean },
+  /** the run of each chord; undefined for one closed run (no run ends) */
+  run: Int32Array | undefined,
 ): boolean {
   const c = cut.length;
   const m = 4 * n + c;
@@ -462,9 +459,11 @@ function innerHalvesInside(
         add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
         continue;
       }
-      const ends = runEnds(i);
-      const s0 = ends.first ? -END_OVERLAP : 0;
-      const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
+      // whether the chord starts or ends a run (its band's end overlap is drawn there)
+      const first = run !== undefined && run[i === 0 ? n - 1 : i - 1] !== run[i];
+      const last = run !== undefined && run[i + 1 === n ? 0 : i + 1] !== run[i];
+      const s0 = first ? -END_OVERLAP : 0;
+      const s1 = len[i]! + (last ? END_OVERLAP : 0);
       // inward normal: perp of the direction
       const inx = -dy[i]! * w;
       const iny = dx[i]! * w;
@@ -478,8 +477,8 @@ function innerHalvesInside(
       }
       // An end of a half-band at a convex vertex inside a run lies inside the neighbouring
       // half-band (see hiddenEnd), so it is not a side of their union and need not be tested.
-      if (ends.first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
-      if (ends.last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
+      if (first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
+      if (last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
     }
   // The pairs tested are those whose x ranges and y ranges both overlap; whether any of them
   // crosses does not depend on the order they come in, so the sweep runs along the longer side
