@@ -1427,7 +1427,12 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     }
     const dx = Math.max(minX - p.x, 0, p.x - maxX);
     const dy = Math.max(minY - p.y, 0, p.y - maxY);
-    if (hypotAbove(dx, dy, best.distance)) continue;
+    // The point found on a segment is rounded and can lie outside its box by a few units in the
+    // last place of the box's coordinates (e.g. from + (to − from)·1 ≠ to): skip only a box
+    // farther than the best distance by more than that, so the pruned search still picks what
+    // the search over every segment picks.
+    const slack = 1e-12 * Math.max(Math.abs(minX), Math.abs(maxX), Math.abs(minY), Math.abs(maxY));
+    if (hypotAbove(dx, dy, best.distance + slack)) continue;
     let t: number;
     if (s.kind === 'line') {
       const d = vecSub(s.to, s.from);
