@@ -3,7 +3,7 @@
  * `length` is always arc length in mm.
  */
 import { FLATNESS, LENGTH_TOLERANCE, PARAM_EPSILON, POINT_EPSILON } from './tolerance.ts';
-import { type Point, vecCross, vecDistance, vecDot, vecLength, vecLerp, vecSub } from './vec.ts';
+import { type Point, vecCross, vecDistance, vecDot, vecHypot, vecLength, vecLerp, vecSub } from './vec.ts';
 
 /** A cubic Bézier: start, first control, second control, end. */
 export type Cubic = readonly [Point, Point, Point, Point];
@@ -285,7 +285,7 @@ export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
 const FLATTEN_STACK = new Float64Array(10 * 22);
 const FLATTEN_DEPTHS = new Int32Array(22);
 
-/** cubicFlatness(c) <= tolerance, decided without Math.hypot unless the squares are too close to call. */
+/** cubicFlatness(c) <= tolerance, decided without the root unless the squares are too close to call. */
 function flatWithin(x0: number, y0: number, x1: number, y1: number, x2: number, y2: number, x3: number, y3: number, tolerance: number, tol2: number): boolean {
   return pointNearChord(x1, y1, x0, y0, x3, y3, tolerance, tol2) && pointNearChord(x2, y2, x0, y0, x3, y3, tolerance, tol2);
 }
@@ -309,7 +309,7 @@ function pointNearChord(px: number, py: number, ax: number, ay: number, bx: numb
   // the squared sum differs from hypot² by a few ulps at most: decide directly away from the boundary
   if (d2 < tol2 * (1 - 1e-9)) return true;
   if (d2 > tol2 * (1 + 1e-9)) return false;
-  return Math.hypot(dx, dy) <= tolerance;
+  return vecHypot(dx, dy) <= tolerance;
 }
 
 /** The polyline of cubicFlattenTimes as points (first = c[0], last = c[3]). */
@@ -422,14 +422,17 @@ const ROOT_RESIDUAL = 1e-9;
  * direction `direction`, sorted. Degenerate: a zero direction gives []; a cubic lying on the
  * line gives [] (no transversal crossing).
  */
-export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): number[] {
+export function cubicLineIntersections(c: Cubic, origin: Point, direction: Point): readonly number[] {
   return cubicPointsLineIntersections(c[0], c[1], c[2], c[3], origin, direction);
 }
 
+/** No parameters: one shared, frozen empty list (most segments meet most lines nowhere; read-only, so it is never changed). */
+export const NO_TIMES: readonly number[] = Object.freeze([]);
+
 /** cubicLineIntersections of the cubic with control points p0…p3 (no tuple needed). */
-export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3: Point, origin: Point, direction: Point): number[] {
+export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3: Point, origin: Point, direction: Point): readonly number[] {
   const dl = vecLength(direction);
-  if (dl < POINT_EPSILON) return [];
+  if (dl < POINT_EPSILON) return NO_TIMES;
   const nx = -direction.y / dl;
   const ny = direction.x / dl;
   const ox = origin.x;
@@ -439,7 +442,7 @@ export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3
   const s2 = nx * (p2.x - ox) + ny * (p2.y - oy);
   const s3 = nx * (p3.x - ox) + ny * (p3.y - oy);
   const sMax = Math.max(Math.abs(s0), Math.abs(s1), Math.abs(s2), Math.abs(s3));
-  if (sMax < POINT_EPSILON) return [];
+  if (sMax < POINT_EPSILON) return NO_TIMES;
   // All four control points clearly on one side of the line: no root can be accepted. On [0, 1]
   // the curve's distance is a convex combination of s0…s3, so |f| ≥ m (m: the smallest |s_i|,
   // all of one sign); on the PARAM_EPSILON margins it falls by at most 1e-9 · 54·sMax (|f′| ≤
@@ -447,7 +450,7 @@ export function cubicPointsLineIntersections(p0: Point, p1: Point, p2: Point, p3
   // cubicRootsInto accepts a root only where |f| ≤ ROOT_RESIDUAL (1e-9) · its coefficients'
   // scale (≤ 12·sMax) · (1 + 1e-9)³: the full search would return [] as well.
   const m = 1e-6 * sMax;
-  if ((s0 > m && s1 > m && s2 > m && s3 > m) || (s0 < -m && s1 < -m && s2 < -m && s3 < -m)) return [];
+  if ((s0 > m && s1 > m && s2 > m && s3 > m) || (s0 < -m && s1 < -m && s2 < -m && s3 < -m)) return NO_TIMES;
   // Bernstein → power basis.
   const a = -s0 + 3 * s1 - 3 * s2 + s3;
   const b = 3 * s0 - 6 * s1 + 3 * s2;
@@ -535,7 +538,7 @@ export function cubicNearestTime(c: Cubic, p: Point): number {
   for (let i = 0; i <= n; i++) {
     const t = i / n;
     // the squared distance from cubicPoint(c, t) to p, cubicPoint's arithmetic inline (the
-    // nearest sample is the same by squares; Math.hypot is only taken for the winner)
+    // nearest sample is the same by squares; the root is only taken for the winner)
     const mt = 1 - t;
     const a = mt * mt * mt;
     const b = 3 * mt * mt * t;

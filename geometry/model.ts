@@ -8,7 +8,7 @@
 import { z } from 'zod';
 import { type Contour, type Path, PathDataError, contourNearest, pathFromSvg } from './path.ts';
 import { POINT_EPSILON } from './tolerance.ts';
-import type { Point } from './vec.ts';
+import { type Point, vecHypot } from './vec.ts';
 
 /** The current format version. A file without `version` is read as version 1. */
 export const PATTERN_VERSION = 1;
@@ -208,5 +208,5 @@ export function landmarkOf(outline: Outline, name: string): Landmark | undefined
 
 /** Same point within POINT_EPSILON; for tests and callers comparing landmarks. */
 export function samePoint(a: Point, b: Point): boolean {
-  return Math.hypot(a.x - b.x, a.y - b.y) <= POINT_EPSILON;
+  return vecHypot(a.x - b.x, a.y - b.y) <= POINT_EPSILON;
 }

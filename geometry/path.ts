@@ -18,6 +18,7 @@ import {
   cubicSplit,
   cubicTangent,
   cubicTimeAtLength,
+  NO_TIMES,
   quadraticToCubic,
   solveQuadratic,
 } from './bezier.ts';
@@ -30,6 +31,7 @@ import {
   vecCross,
   vecDistance,
   vecDot,
+  vecHypot,
   vecLerp,
   vecNormalize,
   vecSub,
@@ -141,15 +143,15 @@ export function segmentMapPoints(s: Segment, f: (p: Point) => Point): Segment {
 }
 
 /** Parameters where the segment meets an infinite line, sorted. */
-export function segmentLineIntersections(s: Segment, origin: Point, direction: Point): number[] {
+export function segmentLineIntersections(s: Segment, origin: Point, direction: Point): readonly number[] {
   if (s.kind === 'line') {
     // vecSub and vecCross written out (the same arithmetic in the same order, without the objects)
     const dx = s.to.x - s.from.x;
     const dy = s.to.y - s.from.y;
     const den = dx * direction.y - dy * direction.x;
-    if (Math.abs(den) < 1e-12 * Math.max(1, Math.hypot(dx, dy) * Math.hypot(direction.x, direction.y))) return [];
+    if (Math.abs(den) < 1e-12 * Math.max(1, vecHypot(dx, dy) * vecHypot(direction.x, direction.y))) return NO_TIMES;
     const t = ((origin.x - s.from.x) * direction.y - (origin.y - s.from.y) * direction.x) / den;
-    return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : [];
+    return t >= -PARAM_EPSILON && t <= 1 + PARAM_EPSILON ? [Math.min(1, Math.max(0, t))] : NO_TIMES;
   }
   return cubicPointsLineIntersections(s.from, s.c1, s.c2, s.to, origin, direction);
 }
@@ -267,8 +269,8 @@ function readPath(d: string): Path {
 }
 
 /**
- * Math.hypot(dx, dy) > limit (limit ≥ 0), decided on the squares unless they are too close to
- * call, then by Math.hypot itself: the squared sum is within a few ulps of hypot², so away
+ * vecHypot(dx, dy) > limit (limit ≥ 0), decided on the squares unless they are too close to
+ * call, then by vecHypot itself: the squared sum is within a few ulps of hypot², so away
  * from a 1e-9 relative band the two decide alike (non-finite values and underflow fall into
  * the band or decide alike too).
  */
@@ -277,7 +279,7 @@ export function hypotAbove(dx: number, dy: number, limit: number): boolean {
   const l2 = limit * limit;
   if (d2 > l2 * (1 + 1e-9)) return true;
   if (d2 < l2 * (1 - 1e-9)) return false;
-  return Math.hypot(dx, dy) > limit;
+  return vecHypot(dx, dy) > limit;
 }
 
 /**
@@ -517,6 +519,15 @@ function fmt(v: number, decimals: number): string {
 const ZEROS = ['', '0', '00', '000', '0000', '00000', '000000'];
 const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000, 10000000, 100000000];
 
+/**
+ * pathToSvg's text printed at once, also during a replay: for a result that no later step of a
+ * replay is likely to read again (a cut line), whose text is smaller than its path objects,
+ * which would otherwise stay alive (and be copied by the garbage collector) until the end.
+ */
+export function pathToSvgNow(path: Path, decimals = 4): string {
+  return writePath(path, decimals);
+}
+
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
 export function pathToSvg(path: Path, decimals = 4): string {
   if (deferred && allFinite(path, decimals)) {
@@ -527,25 +538,128 @@ export function pathToSvg(path: Path, decimals = 4): string {
   return writePath(path, decimals);
 }
 
+/**
+ * The text pathToSvg prints: absolute M/L/C/Z commands, parts separated by one space, each
+ * number as fmt prints it. Written as character codes into one growing scratch array and made
+ * into a string once, instead of a string per number and per part joined at the end (the
+ * printing of a replayed stack's results was a tenth of its time, most of it in those strings).
+ */
 function writePath(path: Path, decimals: number): string {
-  const parts: string[] = [];
+  const w = TEXT;
+  w.length = 0;
   for (const c of path) {
     const segs = c.segments;
     if (segs.length === 0) continue;
-    parts.push('M' + fmtPoint(segs[0]!.from, decimals));
+    if (w.length > 0) w.code(SPACE);
+    w.code(CHAR_M);
+    w.point(segs[0]!.from, decimals);
     for (let i = 0; i < segs.length; i++) {
       const s = segs[i]!;
       if (c.closed && i === segs.length - 1 && s.kind === 'line') continue; // Z draws it
-      parts.push(s.kind === 'line' ? 'L' + fmtPoint(s.to, decimals) : 'C' + fmtPoint(s.c1, decimals) + ' ' + fmtPoint(s.c2, decimals) + ' ' + fmtPoint(s.to, decimals));
+      w.code(SPACE);
+      if (s.kind === 'line') {
+        w.code(CHAR_L);
+        w.point(s.to, decimals);
+      } else {
+        w.code(CHAR_C);
+        w.point(s.c1, decimals);
+        w.code(SPACE);
+        w.point(s.c2, decimals);
+        w.code(SPACE);
+        w.point(s.to, decimals);
+      }
     }
-    if (c.closed) parts.push('Z');
+    if (c.closed) {
+      w.code(SPACE);
+      w.code(CHAR_Z);
+    }
   }
-  return parts.join(' ');
+  return w.text();
 }
 
-function fmtPoint(q: Point, decimals: number): string {
-  return fmt(q.x, decimals) + ' ' + fmt(q.y, decimals);
+const SPACE = 0x20;
+const CHAR_M = 0x4d;
+const CHAR_L = 0x4c;
+const CHAR_C = 0x43;
+const CHAR_Z = 0x5a;
+const CHAR_0 = 0x30;
+const CHAR_MINUS = 0x2d;
+const CHAR_DOT = 0x2e;
+
+/** Character codes of path text being written (ASCII only), reused from one path to the next. */
+class TextWriter {
+  codes = new Uint8Array(4096);
+  length = 0;
+
+  code(c: number): void {
+    if (this.length === this.codes.length) this.grow();
+    this.codes[this.length++] = c;
+  }
+
+  private grow(): void {
+    const bigger = new Uint8Array(this.codes.length * 2);
+    bigger.set(this.codes);
+    this.codes = bigger;
+  }
+
+  point(q: Point, decimals: number): void {
+    this.number(q.x, decimals);
+    this.code(SPACE);
+    this.number(q.y, decimals);
+  }
+
+  /** fmt(v, decimals), written digit by digit where fmt takes its fast form, else fmt's text. */
+  number(v: number, decimals: number): void {
+    const k = POW10[decimals] ?? 10 ** decimals;
+    const n = Math.round(v * k);
+    if (n === 0) {
+      this.code(CHAR_0);
+      return;
+    }
+    if (!(decimals <= 6 && Math.abs(n) < k * 1e6)) {
+      const text = fmt(v, decimals);
+      for (let i = 0; i < text.length; i++) this.code(text.charCodeAt(i));
+      return;
+    }
+    // as fmt: the integer part and the decimals of |n| / k as integers, trailing zeros dropped
+    const a = Math.abs(n);
+    if (n < 0) this.code(CHAR_MINUS);
+    const whole = Math.floor(a / k);
+    this.digits(whole, 1);
+    let part = a - whole * k;
+    if (part === 0) return;
+    let places = decimals;
+    while (part % 10 === 0) {
+      part /= 10;
+      places--;
+    }
+    this.code(CHAR_DOT);
+    this.digits(part, places);
+  }
+
+  /** The decimal digits of a non-negative integer below 2^53, zero-padded on the left to `width`. */
+  private digits(value: number, width: number): void {
+    let count = 1;
+    for (let p = 10; p <= value; p *= 10) count++;
+    if (count < width) count = width;
+    if (this.length + count > this.codes.length) this.grow();
+    let v = value;
+    for (let i = this.length + count - 1; i >= this.length; i--) {
+      const q = Math.floor(v / 10);
+      this.codes[i] = CHAR_0 + (v - q * 10);
+      v = q;
+    }
+    this.length += count;
+  }
+
+  /** The text written so far: ASCII codes read as UTF-8 are the same characters; decoding them is one fast call. */
+  text(): string {
+    return ASCII.decode(this.codes.subarray(0, this.length));
+  }
 }
+/** UTF-8 TextDecoder (WHATWG Encoding; in every browser and in Node), typed here: geometry/ compiles without DOM or Node types. */
+const ASCII = new (globalThis as unknown as { TextDecoder: new () => { decode(input: Uint8Array): string } }).TextDecoder();
+const TEXT = new TextWriter();
 
 // ------------------------------------------------------- deferred writing (applyOps)
 
@@ -562,6 +676,13 @@ interface DeferredRun {
   readonly texts: Map<string, { readonly path: Path; readonly decimals: number; read: Path | undefined }>;
   /** Placeholders handed out so far (the number in the next one; entries may have been dropped by `retain`). */
   issued: number;
+  /**
+   * Flattenings of cubics first flattened during the run (see cubicFlattening). Dropped at its
+   * end but for the cubics of the run's input, which the next run on the same input meets again.
+   */
+  flattenings: Map<Segment, CubicFlattening[]>;
+  /** The run's flattenings before the last `retain` (between operations): found again, an entry moves back. */
+  flatteningsBefore: Map<Segment, CubicFlattening[]>;
 }
 let deferred: DeferredRun | undefined;
 let deferredRuns = 0;
@@ -579,7 +700,7 @@ const DEFERRED_PREFIX = '\u0000path:';
  */
 export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string, retain: (inUse: readonly string[]) => void) => T): T {
   if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d, () => {});
-  const run: DeferredRun = { run: ++deferredRuns, texts: new Map(), issued: 0 };
+  const run: DeferredRun = { run: ++deferredRuns, texts: new Map(), issued: 0, flattenings: new Map(), flatteningsBefore: new Map() };
   deferred = run;
   try {
     return body(
@@ -588,6 +709,8 @@ export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d
         return entry ? writePath(entry.path, entry.decimals) : d;
       },
       (inUse) => {
+        run.flatteningsBefore = run.flattenings;
+        run.flattenings = new Map();
         if (run.texts.size === 0) return;
         const used = new Set(inUse);
         for (const token of run.texts.keys()) if (!used.has(token)) run.texts.delete(token);
@@ -595,6 +718,23 @@ export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d
     );
   } finally {
     deferred = undefined;
+    keepInputFlattenings(texts, run.flattenings);
+    keepInputFlattenings(texts, run.flatteningsBefore);
+  }
+}
+
+/** Move the flattenings a run made of its input's cubics (the parsed texts it was given) to the lasting memo. */
+function keepInputFlattenings(texts: readonly string[], flattenings: Map<Segment, CubicFlattening[]>): void {
+  if (flattenings.size === 0) return;
+  for (const d of texts) {
+    const path = PARSE_CACHE.get(d);
+    if (!path) continue;
+    for (const c of path)
+      for (const s of c.segments) {
+        if (s.kind !== 'cubic') continue;
+        const kept = flattenings.get(s);
+        if (kept) rememberFlattenings(s, kept);
+      }
   }
 }
 
@@ -766,7 +906,11 @@ export function contourExtremePoints(c: Contour, direction: Point): Point[] {
       const a0 = (s.c1.x - s.from.x) * direction.x + (s.c1.y - s.from.y) * direction.y;
       const a1 = (s.c2.x - s.c1.x) * direction.x + (s.c2.y - s.c1.y) * direction.y;
       const a2 = (s.to.x - s.c2.x) * direction.x + (s.to.y - s.c2.y) * direction.y;
-      for (const t of solveQuadratic(a0 - 2 * a1 + a2, 2 * (a1 - a0), a0)) if (t > 0 && t < 1) out.push(cubicPoint([s.from, s.c1, s.c2, s.to], t));
+      const roots = solveQuadratic(a0 - 2 * a1 + a2, 2 * (a1 - a0), a0);
+      for (let k = 0; k < roots.length; k++) {
+        const t = roots[k]!;
+        if (t > 0 && t < 1) out.push(cubicPoint([s.from, s.c1, s.c2, s.to], t));
+      }
     }
     out.push(s.to);
   }
@@ -848,7 +992,7 @@ export function contourFlatPerimeter(c: Contour, tolerance = FLATNESS): number {
   let pending = 0;
   const visit = (x: number, y: number): void => {
     if (count > 1) total += pending;
-    pending = Math.hypot(lx - x, ly - y);
+    pending = vecHypot(lx - x, ly - y);
     bx = lx;
     by = ly;
     lx = x;
@@ -867,9 +1011,9 @@ export function contourFlatPerimeter(c: Contour, tolerance = FLATNESS): number {
     for (let k = 1; k < xs.length; k++) visit(xs[k]!, ys[k]!);
   }
   // contourFlatPoints leaves out a closed contour's last point: its chord goes, the one before closes
-  if (c.closed && count > 1) return total + Math.hypot(bx - x0, by - y0);
+  if (c.closed && count > 1) return total + vecHypot(bx - x0, by - y0);
   if (count > 1) total += pending;
-  return total + Math.hypot(lx - x0, ly - y0);
+  return total + vecHypot(lx - x0, ly - y0);
 }
 
 /**
@@ -919,12 +1063,24 @@ interface CubicFlattening {
  * CUBIC_FLATTEN_GENERATION cubics and the one before it (a cubic found in the older one moves
  * to the newer). A Map, not a WeakMap: setting a key in a WeakMap cost about 1 µs and work for
  * the garbage collector (a tenth of the stack's time); a Map costs about half, and the bound
- * keeps what it holds to a few thousand flattenings. Which entries are kept changes only the
- * speed: a flattening made again is the same.
+ * keeps what it holds to a few thousand flattenings. During a replay (pathTextDeferred), cubics
+ * not yet in it go to a memo of the run instead, which ends with the run but for the cubics of
+ * the run's input: the intermediate results of a replay are garbage once it ends, and keeping
+ * their flattenings for the next few thousand cubics made the garbage collector copy them and
+ * move them to the old generation (most of what survived a young collection). Which entries are
+ * kept changes only the speed: a flattening made again is the same.
  */
 let CUBIC_FLATTEN_CACHE = new Map<Segment, CubicFlattening[]>();
 let CUBIC_FLATTEN_OLDER = new Map<Segment, CubicFlattening[]>();
 const CUBIC_FLATTEN_GENERATION = 2048;
+
+function rememberFlattenings(s: Segment, kept: CubicFlattening[]): void {
+  if (CUBIC_FLATTEN_CACHE.size >= CUBIC_FLATTEN_GENERATION) {
+    CUBIC_FLATTEN_OLDER = CUBIC_FLATTEN_CACHE;
+    CUBIC_FLATTEN_CACHE = new Map();
+  }
+  CUBIC_FLATTEN_CACHE.set(s, kept);
+}
 
 /** The most tolerances kept per cubic (the oldest is dropped). */
 const CUBIC_FLATTEN_KEEP = 3;
@@ -932,12 +1088,20 @@ const CUBIC_FLATTEN_KEEP = 3;
 function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
   let kept = CUBIC_FLATTEN_CACHE.get(s);
   if (!kept) {
-    kept = CUBIC_FLATTEN_OLDER.get(s) ?? [];
-    if (CUBIC_FLATTEN_CACHE.size >= CUBIC_FLATTEN_GENERATION) {
-      CUBIC_FLATTEN_OLDER = CUBIC_FLATTEN_CACHE;
-      CUBIC_FLATTEN_CACHE = new Map();
+    const local = deferred?.flattenings;
+    kept = local?.get(s);
+    if (!kept && deferred) {
+      kept = deferred.flatteningsBefore.get(s);
+      if (kept) local!.set(s, kept);
     }
-    CUBIC_FLATTEN_CACHE.set(s, kept);
+    if (!kept) {
+      const older = CUBIC_FLATTEN_OLDER.get(s);
+      kept = older ?? [];
+      // a cubic new to a replay (applyOps) is most likely one of its intermediate results: its
+      // flattenings stay with the run and die with it (see keepInputFlattenings)
+      if (local && !older) local.set(s, kept);
+      else rememberFlattenings(s, kept);
+    }
   }
   for (const f of kept) if (f.tolerance === tolerance) return f;
   const ts = cubicFlattenTimes([s.from, s.c1, s.c2, s.to], tolerance);
@@ -995,7 +1159,7 @@ function segmentsIntersect(a: Point, b: Point, c: Point, d: Point): Point | null
   const qp = vecSub(c, a);
   if (Math.abs(den) < 1e-15) {
     // parallel: overlapping collinear pieces count as touching
-    if (Math.abs(vecCross(qp, r)) > 1e-9 * Math.max(1, Math.hypot(r.x, r.y))) return null;
+    if (Math.abs(vecCross(qp, r)) > 1e-9 * Math.max(1, vecHypot(r.x, r.y))) return null;
     const rr = vecDot(r, r);
     if (rr === 0) return null;
     const t0 = vecDot(qp, r) / rr;
@@ -1128,7 +1292,7 @@ function segmentsMeet(ax: number, ay: number, bx: number, by: number, cx: number
   const qx = cx - ax;
   const qy = cy - ay;
   if (Math.abs(den) < 1e-15) {
-    if (Math.abs(qx * ry - qy * rx) > 1e-9 * Math.max(1, Math.hypot(rx, ry))) return false;
+    if (Math.abs(qx * ry - qy * rx) > 1e-9 * Math.max(1, vecHypot(rx, ry))) return false;
     const rr = rx * rx + ry * ry;
     if (rr === 0) return false;
     const t0 = (qx * rx + qy * ry) / rr;
@@ -1263,7 +1427,12 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     }
     const dx = Math.max(minX - p.x, 0, p.x - maxX);
     const dy = Math.max(minY - p.y, 0, p.y - maxY);
-    if (hypotAbove(dx, dy, best.distance)) continue;
+    // The point found on a segment is rounded and can lie outside its box by a few units in the
+    // last place of the box's coordinates (e.g. from + (to − from)·1 ≠ to): skip only a box
+    // farther than the best distance by more than that, so the pruned search still picks what
+    // the search over every segment picks.
+    const slack = 1e-12 * Math.max(Math.abs(minX), Math.abs(maxX), Math.abs(minY), Math.abs(maxY));
+    if (hypotAbove(dx, dy, best.distance + slack)) continue;
     let t: number;
     if (s.kind === 'line') {
       const d = vecSub(s.to, s.from);

@@ -106,8 +106,13 @@ function resolveTexts(pattern: Pattern, resolve: (d: string) => string): Pattern
 function replay(pattern: Pattern, ops: readonly unknown[], performed: (current: Pattern) => void): { pattern: Pattern; cautions: AppliedCaution[] } {
   let current = pattern;
   const cautions: AppliedCaution[] = [];
+  // Every operation is checked before the first is performed, one after the other: schema
+  // checks interleaved with the geometry ran several times slower (each found its code and
+  // caches cold). A bad operation is still reported when the replay reaches it, so an earlier
+  // refusal comes first, as before.
+  const checked = ops.map((raw) => alterationOpSchema.safeParse(raw));
   ops.forEach((raw, index) => {
-    const parsed = alterationOpSchema.safeParse(raw);
+    const parsed = checked[index]!;
     const kind = typeof raw === 'object' && raw !== null && 'op' in raw ? String((raw as { op: unknown }).op) : 'unknown';
     if (!parsed.success) {
       const issue = parsed.error.issues[0]!;

@@ -36,7 +36,7 @@ import {
   segmentPoint,
 } from '../path.ts';
 import { BLEND_SAMPLE_SPACING, POINT_EPSILON } from '../tolerance.ts';
-import { type Point, vecDistance, vecDot, vecSub } from '../vec.ts';
+import { type Point, vecDistance, vecDot, vecHypot, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple, pieceGrain, smoothThrough } from './common.ts';
 
 export const blendOpSchema = z.object({
@@ -110,7 +110,7 @@ function collinear(q: readonly Point[]): boolean {
   const a = q[0]!;
   const b = q[q.length - 1]!;
   const d = vecSub(b, a);
-  const l = Math.hypot(d.x, d.y);
+  const l = vecHypot(d.x, d.y);
   if (l < POINT_EPSILON) return false;
   return q.every((p) => Math.abs((p.x - a.x) * d.y - (p.y - a.y) * d.x) / l < 1e-6);
 }

@@ -18,7 +18,7 @@ import {
 } from '../path.ts';
 import { PARAM_EPSILON, REDRAW_CHECKS, REDRAW_TOLERANCE, SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
 import { type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, outlineContour, orderedOutlines } from '../model.ts';
-import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecNormalize, vecSub } from '../vec.ts';
+import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecHypot, vecNormalize, vecSub } from '../vec.ts';
 
 /** Something the person should know about a result (an estimate, a large change, …). */
 export interface Caution {
@@ -128,15 +128,18 @@ export function bandMapSegment(m: BandMap, s: Segment): Segment[] {
 }
 
 /** Where a segment meets each cut line, per cut line (`origins`: m.lineAt of each break, when the caller has them). */
-function cutsOf(m: BandMap, s: Segment, origins: readonly Point[] = m.breaks.map((b) => m.lineAt(b))): number[][] {
-  const out: number[][] = [];
+function cutsOf(m: BandMap, s: Segment, origins: readonly Point[] = m.breaks.map((b) => m.lineAt(b))): (readonly number[])[] {
+  const out: (readonly number[])[] = [];
   for (let i = 0; i < origins.length; i++) out.push(segmentLineIntersections(s, origins[i]!, m.direction));
   return out;
 }
 
 function mapSegmentAt(m: BandMap, s: Segment, cuts: readonly (readonly number[])[]): Segment[] {
   const ts: number[] = [];
-  for (const c of cuts) ts.push(...c);
+  for (let i = 0; i < cuts.length; i++) {
+    const c = cuts[i]!;
+    for (let k = 0; k < c.length; k++) ts.push(c[k]!);
+  }
   // A part in an identity band is handed back as it is: the identity moves no number (it only
   // turns −0 into 0, which prints and reads back the same), and an unsplit segment that stays
   // the very same object keeps its flattenings for the next check or operation.
@@ -152,16 +155,20 @@ export function bandMapPath(m: BandMap, path: Path): Path {
   // a segment no cut line splits (no time strictly inside by more than PARAM_EPSILON, so
   // segmentSplitAt hands it back whole) keeps the map of its band, found once for both too
   const origins = m.breaks.map((b) => m.lineAt(b));
-  const cuts: (number[][] | undefined)[][] = [];
+  const cuts: ((readonly number[])[] | undefined)[][] = [];
   const whole: (Affine | undefined)[][] = [];
   let untouched = true;
-  for (const c of path) {
-    const cc: (number[][] | undefined)[] = [];
+  for (let ci = 0; ci < path.length; ci++) {
+    const c = path[ci]!;
+    const cc: ((readonly number[])[] | undefined)[] = [];
     const cw: (Affine | undefined)[] = [];
     for (const s of c.segments) {
       const ts = cutsOf(m, s, origins);
       let split = false;
-      for (const list of ts) for (const t of list) if (t > PARAM_EPSILON && t < 1 - PARAM_EPSILON) split = true;
+      for (let i = 0; i < ts.length; i++) {
+        const list = ts[i]!;
+        for (let k = 0; k < list.length; k++) if (list[k]! > PARAM_EPSILON && list[k]! < 1 - PARAM_EPSILON) split = true;
+      }
       if (split) {
         untouched = false;
         cc.push(ts);
@@ -184,8 +191,10 @@ export function bandMapPath(m: BandMap, path: Path): Path {
     for (let si = 0; si < c.segments.length; si++) {
       const s = c.segments[si]!;
       const map = cw[si];
-      if (map === undefined) segments.push(...mapSegmentAt(m, s, cc[si]!));
-      else segments.push(map === AFFINE_IDENTITY ? s : segmentTransform(s, map));
+      if (map === undefined) {
+        const parts = mapSegmentAt(m, s, cc[si]!);
+        for (let k = 0; k < parts.length; k++) segments.push(parts[k]!);
+      } else segments.push(map === AFFINE_IDENTITY ? s : segmentTransform(s, map));
     }
     return { closed: c.closed, segments };
   });
@@ -309,7 +318,7 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
     const { from: p0, c1: p1, c2: p2, to: p3 } = seg;
     for (let i = k + 1; i < m; i++) {
       // vecDistance(cubicPoint(seg, u), q[i]) > mergeTolerance, with cubicPoint's arithmetic
-      // inline and Math.hypot only when the squared distance is too close to call
+      // inline and the root only when the squared distance is too close to call
       const u = (cum[i]! - cum[k]!) / len;
       const mu = 1 - u;
       const a = mu * mu * mu;
@@ -319,7 +328,7 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
       const dx = a * p0.x + b * p1.x + c * p2.x + e * p3.x - q[i]!.x;
       const dy = a * p0.y + b * p1.y + c * p2.y + e * p3.y - q[i]!.y;
       const d2 = dx * dx + dy * dy;
-      if (d2 > tol2 * (1 + 1e-9) || (d2 >= tol2 * (1 - 1e-9) && Math.hypot(dx, dy) > mergeTolerance)) return undefined;
+      if (d2 > tol2 * (1 + 1e-9) || (d2 >= tol2 * (1 - 1e-9) && vecHypot(dx, dy) > mergeTolerance)) return undefined;
     }
     return seg;
   };
@@ -487,7 +496,11 @@ function fitSpan(s: Segment, ta: number, tb: number, a: MappedEnd, b: MappedEnd,
  */
 export function segmentCutTimes(s: Segment, lines: readonly { readonly origin: Point; readonly direction: Point }[]): number[] {
   const ts: number[] = [];
-  for (const l of lines) for (const t of segmentLineIntersections(s, l.origin, l.direction)) if (t > PARAM_EPSILON && t < 1 - PARAM_EPSILON) ts.push(t);
+  for (let i = 0; i < lines.length; i++) {
+    const l = lines[i]!;
+    const found = segmentLineIntersections(s, l.origin, l.direction);
+    for (let k = 0; k < found.length; k++) if (found[k]! > PARAM_EPSILON && found[k]! < 1 - PARAM_EPSILON) ts.push(found[k]!);
+  }
   if (ts.length < 2) return ts;
   ts.sort((p, q) => p - q);
   const out = [ts[0]!];

@@ -23,8 +23,8 @@ import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
-import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvg } from '../path.ts';
-import { type Point, vecAdd, vecCross, vecDistance, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
+import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvgNow } from '../path.ts';
+import { type Point, vecAdd, vecCross, vecDistance, vecHypot, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
 /** Widths below this (mm) are taken as no allowance: a thinner band is below cutting precision and only adds round-off slivers. */
@@ -258,7 +258,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
     for (let i = 1; i < pts.length; i++) {
       const a = pts[i - 1]!;
       const b = pts[i]!;
-      const l = Math.hypot(b.x - a.x, b.y - a.y);
+      const l = vecHypot(b.x - a.x, b.y - a.y);
       total += l;
       if (!(l > 1e-9)) continue;
       px[k] = a.x;
@@ -311,7 +311,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
     let sA: number; // along A from the corner
     let sB: number; // along B from chord j's start
     if (Math.abs(sin) < 1e-9) {
-      if (cos < 0 || Math.abs(wi - wj) > 1e-12 || Math.hypot(ox, oy) > 1e-9) return false;
+      if (cos < 0 || Math.abs(wi - wj) > 1e-12 || vecHypot(ox, oy) > 1e-9) return false;
       sA = 0;
       sB = 0;
     } else {
@@ -326,7 +326,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       if (between) {
         const mx = wi * nix + sA * dx[i]!;
         const my = wi * niy + sA * dy[i]!;
-        if (Math.hypot(mx, my) > MITRE_LIMIT * Math.max(wi, wj)) return false; // bevelled
+        if (vecHypot(mx, my) > MITRE_LIMIT * Math.max(wi, wj)) return false; // bevelled
         // each band's end overlap must stay inside the mitre (or stick out by a negligible sliver)
         if (sA < END_OVERLAP && (sA < 0 || (END_OVERLAP - sA) * sin > OVERLAP_SLACK)) return false;
         if (-sB < END_OVERLAP && (-sB < 0 || (END_OVERLAP + sB) * sin > OVERLAP_SLACK)) return false;
@@ -387,11 +387,7 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
   // the join points of the chords kept, in order (a list of its final size)
   const out = new Array<Point>(kept);
   for (let i = 0, o = 0; i < n; i++) if (prev[i] !== -1) out[o++] = { x: jx[i]!, y: jy[i]! };
-  const runEnds = (i: number) => ({
-    first: !closedRun && run[i === 0 ? n - 1 : i - 1] !== run[i],
-    last: !closedRun && run[i + 1 === n ? 0 : i + 1] !== run[i],
-  });
-  if (!innerHalvesInside(out, n, px, py, dx, dy, len, wd, runEnds)) return undefined;
+  if (!innerHalvesInside(out, n, px, py, dx, dy, len, wd, closedRun ? undefined : run)) return undefined;
   // `out[i]` joins chord i to chord i + 1; the polygon runs through them in order
   const cut = contourFromPoints(out, true);
   if (!contourIsSimple(cut) || contourSignedArea(cut) <= 0) return undefined;
@@ -430,7 +426,8 @@ function innerHalvesInside(
   dy: Float64Array,
   len: Float64Array,
   wd: Float64Array,
-  runEnds: (i: number) => { first: boolean; last: boolean },
+  /** the run of each chord; undefined for one closed run (no run ends) */
+  run: Int32Array | undefined,
 ): boolean {
   const c = cut.length;
   const m = 4 * n + c;
@@ -462,9 +459,11 @@ function innerHalvesInside(
         add(px[i]!, py[i]!, px[i]! + len[i]! * dx[i]!, py[i]! + len[i]! * dy[i]!);
         continue;
       }
-      const ends = runEnds(i);
-      const s0 = ends.first ? -END_OVERLAP : 0;
-      const s1 = len[i]! + (ends.last ? END_OVERLAP : 0);
+      // whether the chord starts or ends a run (its band's end overlap is drawn there)
+      const first = run !== undefined && run[i === 0 ? n - 1 : i - 1] !== run[i];
+      const last = run !== undefined && run[i + 1 === n ? 0 : i + 1] !== run[i];
+      const s0 = first ? -END_OVERLAP : 0;
+      const s1 = len[i]! + (last ? END_OVERLAP : 0);
       // inward normal: perp of the direction
       const inx = -dy[i]! * w;
       const iny = dx[i]! * w;
@@ -478,8 +477,8 @@ function innerHalvesInside(
       }
       // An end of a half-band at a convex vertex inside a run lies inside the neighbouring
       // half-band (see hiddenEnd), so it is not a side of their union and need not be tested.
-      if (ends.first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
-      if (ends.last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
+      if (first || !hiddenEnd(i === 0 ? n - 1 : i - 1, i, dx, dy, len, w)) add(x0, y0, x0 + inx, y0 + iny);
+      if (last || !hiddenEnd(i, i + 1 === n ? 0 : i + 1, dx, dy, len, w)) add(x1, y1, x1 + inx, y1 + iny);
     }
   // The pairs tested are those whose x ranges and y ranges both overlap; whether any of them
   // crosses does not depend on the order they come in, so the sweep runs along the longer side
@@ -567,7 +566,7 @@ export function performSeamAllowance(pattern: Pattern, op: SeamAllowanceOp): OpR
       outlines: piece.outlines.map((o) => {
         const { cut, simple } = cutLineChecked(piece, o, op);
         if (!simple) assertSimple(cut, `seam allowance of piece "${piece.name}" size "${o.size}"`);
-        return { ...o, cut: pathToSvg([cut], 4) };
+        return { ...o, cut: pathToSvgNow([cut], 4) };
       }),
     };
   });

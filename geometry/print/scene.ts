@@ -4,7 +4,7 @@
  * coordinates (the layout); page furniture is in sheet coordinates.
  */
 import { type Contour, contourFlatten, pathToSvg, pathTransform } from '../path.ts';
-import { type Affine, type Point, affineApply, affineApplyVector, pointInPolygon, polygonDistance, vecNormalize } from '../vec.ts';
+import { type Affine, type Point, affineApply, affineApplyVector, pointInPolygon, polygonDistance, vecHypot, vecNormalize } from '../vec.ts';
 import type { Rect, Tile } from './grid.ts';
 import { MM_PER_INCH } from './paper.ts';
 import type { PrintPiece } from './pieces.ts';
@@ -107,7 +107,7 @@ function insideRun(points: readonly Point[], poly: readonly Point[]): { from: Po
   for (let i = 0; i + 1 < points.length; i++) {
     const a = points[i]!;
     const b = points[i + 1]!;
-    const n = Math.max(1, Math.ceil(Math.hypot(b.x - a.x, b.y - a.y) / 2));
+    const n = Math.max(1, Math.ceil(vecHypot(b.x - a.x, b.y - a.y) / 2));
     for (let k = 0; k <= n; k++) samples.push({ x: a.x + ((b.x - a.x) * k) / n, y: a.y + ((b.y - a.y) * k) / n });
   }
   const inside = samples.filter((p) => pointInPolygon(p, poly));
@@ -195,7 +195,7 @@ export function pieceMarks(piece: PrintPiece, transform: Affine, polygon: readon
 
 function nearestDistance(poly: readonly Point[], p: Point): number {
   let d = Infinity;
-  for (const q of poly) d = Math.min(d, Math.hypot(q.x - p.x, q.y - p.y));
+  for (const q of poly) d = Math.min(d, vecHypot(q.x - p.x, q.y - p.y));
   return Number.isFinite(d) ? d : 6;
 }
 

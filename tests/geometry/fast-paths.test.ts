@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Point, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -137,6 +137,52 @@ describe('pathToSvg numbers (fast decimal printing)', () => {
   });
 });
 
+describe('pathToSvg text (written as character codes)', () => {
+  it('is the plain text: M, L, C and Z parts joined by spaces, each number as String() prints it rounded', () => {
+    const value = fc.oneof(
+      fc.double({ min: -2000, max: 2000, noNaN: true }),
+      fc.double({ min: -1e12, max: 1e12, noNaN: true }), // past the fast form: String() itself
+      fc.double({ min: -1e-5, max: 1e-5, noNaN: true }),
+      fc.constantFrom(0, -0, 5e-7, -5e-7, 999999.99995, -999999.99995, 1e6),
+    );
+    const pt = fc.record({ x: value, y: value });
+    const segment = fc.oneof(fc.record({ kind: fc.constant('line' as const), to: pt }), fc.record({ kind: fc.constant('cubic' as const), c1: pt, c2: pt, to: pt }));
+    // up to 600 segments: the longest texts outgrow the writer's first 4096 codes
+    const contour = fc.record({ closed: fc.boolean(), start: pt, segs: fc.array(segment, { maxLength: 600 }) });
+    fc.assert(
+      fc.property(fc.array(contour, { maxLength: 4 }), fc.constantFrom(0, 2, 4, 6), (contours, decimals) => {
+        const path: Path = contours.map((c) => {
+          let from = c.start;
+          const segments: Segment[] = c.segs.map((s) => {
+            const seg: Segment = s.kind === 'line' ? { kind: 'line', from, to: s.to } : { kind: 'cubic', from, c1: s.c1, c2: s.c2, to: s.to };
+            from = s.to;
+            return seg;
+          });
+          return { closed: c.closed, segments };
+        });
+        const k = 10 ** decimals;
+        const plain = (v: number): string => {
+          const r = Math.round(v * k) / k;
+          return r === 0 ? '0' : String(r);
+        };
+        const p2 = (q: Point): string => `${plain(q.x)} ${plain(q.y)}`;
+        const parts: string[] = [];
+        for (const c of path) {
+          if (c.segments.length === 0) continue;
+          parts.push(`M${p2(c.segments[0]!.from)}`);
+          c.segments.forEach((s, i) => {
+            if (c.closed && i === c.segments.length - 1 && s.kind === 'line') return;
+            parts.push(s.kind === 'line' ? `L${p2(s.to)}` : `C${p2(s.c1)} ${p2(s.c2)} ${p2(s.to)}`);
+          });
+          if (c.closed) parts.push('Z');
+        }
+        expect(pathToSvg(path, decimals)).toBe(parts.join(' '));
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
 describe('contourNearest (memo)', () => {
   it('gives the same location as a search over every segment, asked once or twice', () => {
     const segment = fc.tuple(point, point, fc.boolean());
@@ -233,7 +279,12 @@ describe('contourNearest (a point on the contour)', () => {
         expect(found.t).toBe(time);
         expectNear(found.distance, best, 1e-9 * Math.max(1, best));
       }),
-      { numRuns: 300 },
+      {
+        numRuns: 300,
+        // found by a run: a segment from x = −1.57e-162 to −1e-323 whose end is computed as 0,
+        // outside its own box (the pruned search once skipped it)
+        examples: [[{ x: 0, y: 5e-324 }, [[{ x: 0, y: 0 }, { x: -1.5717277847026288e-162, y: 0 }, false], [{ x: 0, y: 0 }, { x: -1e-323, y: 0 }, true], [{ x: 0, y: 0 }, { x: 0, y: 0 }, false]], 1697401127, false]],
+      },
     );
   });
 });
@@ -406,6 +457,25 @@ describe('distance tests on squares (hypotAbove)', () => {
         expect(hypotAbove(dx, dy, l)).toBe(Math.hypot(dx, dy) > l);
       }),
       { numRuns: 20000 },
+    );
+  });
+});
+
+describe('vecHypot (two-number hypot without an argument array)', () => {
+  // Reference: the engine's own Math.hypot (ECMAScript built-in). Node runs V8, whose algorithm
+  // vecHypot follows, so the two must agree to the last bit, signs of zero, NaN and ∞ included.
+  it('gives Math.hypot(dx, dy) exactly, for any two numbers', () => {
+    const any = fc.oneof(
+      fc.double({ noNaN: false }),
+      fc.double({ min: -2000, max: 2000, noNaN: true }),
+      fc.double({ min: -1e-300, max: 1e-300, noNaN: true }),
+      fc.constantFrom(0, -0, Infinity, -Infinity, NaN, Number.MIN_VALUE, Number.MAX_VALUE, 3, 4),
+    );
+    fc.assert(
+      fc.property(any, any, (dx, dy) => {
+        expect(Object.is(vecHypot(dx, dy), Math.hypot(dx, dy))).toBe(true);
+      }),
+      { numRuns: 50000 },
     );
   });
 });

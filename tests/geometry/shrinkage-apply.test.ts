@@ -95,6 +95,9 @@ describe('applyOps — a replayable list', () => {
     expect(() => applyOps(demo, [ops[0], { op: 'lengthen', line: 'lower leg', amount: -900 }])).toThrow(/operation 2 \(lengthen\)/);
     expect(() => applyOps(demo, [{ op: 'lengthen', line: 'lower leg', amount: 'far' }])).toThrow(/operation 1 \(lengthen\): amount/);
     expect(() => applyOps(demo, [{ op: 'twist' }])).toThrow(/operation 1 \(twist\)/);
+    // the first operation refused is the one reported, whether it is refused by the schema or by the geometry
+    expect(() => applyOps(demo, [ops[0], { op: 'lengthen', line: 'lower leg', amount: -900 }, { op: 'twist' }])).toThrow(/operation 2 \(lengthen\)/);
+    expect(() => applyOps(demo, [ops[0], { op: 'twist' }, { op: 'lengthen', line: 'lower leg', amount: -900 }])).toThrow(/operation 2 \(twist\)/);
     expect(JSON.stringify(demo)).toBe(before);
   });
 
