@@ -130,11 +130,15 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   };
 }
 
-function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRotate>): Segment[] {
+/** Push the image of a segment onto `out`; false when it is the segment itself (it lies wholly where nothing moves). */
+function mapSegmentInto(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRotate>, out: Segment[]): boolean {
   // parts between the zone's boundary lines lie wholly in one region; its middle decides, and
   // the redraw checks are probed too (a tangent touch whose root round-off lost, or a segment
   // running behind the hinge, where the angle wraps round)
-  const ts = [0, ...segmentCutTimes(s, m.cuts), 1];
+  const cuts = segmentCutTimes(s, m.cuts);
+  const ts = [0];
+  for (let i = 0; i < cuts.length; i++) ts.push(cuts[i]!);
+  ts.push(1);
   const regions: (0 | 1 | 2)[] = [];
   for (let i = 1; i < ts.length; i++) {
     const [t0, t1] = [ts[i - 1]!, ts[i]!];
@@ -142,19 +146,27 @@ function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRota
     for (let k = 1; k <= REDRAW_CHECKS && region !== 2; k++) if (segmentPointThen(s, t0 + ((t1 - t0) * k) / (REDRAW_CHECKS + 1), m.regionXY) !== region) region = 2;
     regions.push(region);
   }
-  if (regions.length === 1 && regions[0] === 0) return [s];
-  if (regions.length === 1 && regions[0] === 1) return [segmentTransform(s, rigid)];
-  const out: Segment[] = [];
+  if (regions.length === 1 && regions[0] === 0) {
+    out.push(s);
+    return false;
+  }
+  if (regions.length === 1 && regions[0] === 1) {
+    out.push(segmentTransform(s, rigid));
+    return true;
+  }
   for (let i = 1; i < ts.length; i++) {
     const [t0, t1] = [ts[i - 1]!, ts[i]!];
     const region = regions[i - 1]!;
-    if (region === 2) out.push(...redrawMapped(s, t0, t1, m.smooth));
+    if (region === 2) {
+      const redrawn = redrawMapped(s, t0, t1, m.smooth);
+      for (let k = 0; k < redrawn.length; k++) out.push(redrawn[k]!);
+    }
     else {
       const part = segmentSlice(s, t0, t1);
       out.push(region === 0 ? part : segmentTransform(part, rigid));
     }
   }
-  return out;
+  return true;
 }
 
 export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpResult {
@@ -181,14 +193,11 @@ export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof s
   const rigid = affineRotate(side * theta, op.hinge);
   const mapPath = (p: Path): Path => {
     let changed = false;
-    const out = p.map((c) => ({
-      closed: c.closed,
-      segments: c.segments.flatMap((s) => {
-        const r = mapSegment(s, m, rigid);
-        if (r.length !== 1 || r[0] !== s) changed = true;
-        return r;
-      }),
-    }));
+    const out = p.map((c) => {
+      const segments: Segment[] = [];
+      for (let i = 0; i < c.segments.length; i++) if (mapSegmentInto(c.segments[i]!, m, rigid, segments)) changed = true;
+      return { closed: c.closed, segments };
+    });
     return changed ? out : p;
   };
   const piece: Piece = {
