@@ -23,7 +23,7 @@ import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
 import { type Path, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
 import { REDRAW_CHECKS, TRUE_ZONE } from '../tolerance.ts';
-import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
+import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecDot, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 const point = z.object({ x: z.number(), y: z.number() });
@@ -207,7 +207,11 @@ export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof s
       for (const p of contourFlatPoints(outlineContour(o), 0.1)) {
         const d = vecDistance(p, op.hinge);
         if (d < 1) continue;
-        const s = side * vecAngleBetween(ray, vecSub(p, op.hinge));
+        const v = vecSub(p, op.hinge);
+        // within 90° of the slash (atan2 of a non-negative x is within ±π/2) a point cannot turn
+        // past the far boundary: that takes more than π − |θ| ≥ 120°
+        if (vecDot(ray, v) >= 0) continue;
+        const s = side * vecAngleBetween(ray, v);
         if (s + theta > Math.PI - 1e-9 || (theta < 0 && s > Math.PI + theta))
           throw new AlterationError('fold', `slash-spread on "${target.name}" size "${o.size}": part of the piece lies behind the hinge near (${p.x.toFixed(1)}, ${p.y.toFixed(1)}); the wedge would fold the outline — put the hinge on the far edge`, p);
       }
