@@ -214,10 +214,17 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
   };
 }
 
-function deformSegment(s: Segment, field: Field): Segment[] {
-  if (!field.mayMove(s)) return [s];
+/** Push the deformed segment onto `out`; false when it is the segment itself (nothing of it moves). */
+function deformSegmentInto(s: Segment, field: Field, out: Segment[]): boolean {
+  if (!field.mayMove(s)) {
+    out.push(s);
+    return false;
+  }
   // parts between the lines where the field changes its formula; on each the field is smooth
-  const ts = [0, ...segmentCutTimes(s, field.cuts), 1];
+  const cuts = segmentCutTimes(s, field.cuts);
+  const ts = [0];
+  for (let i = 0; i < cuts.length; i++) ts.push(cuts[i]!);
+  ts.push(1);
   const moves: boolean[] = [];
   let any = false;
   for (let i = 1; i < ts.length; i++) {
@@ -230,8 +237,10 @@ function deformSegment(s: Segment, field: Field): Segment[] {
     moves.push(m);
     any ||= m;
   }
-  if (!any) return [s];
-  const out: Segment[] = [];
+  if (!any) {
+    out.push(s);
+    return false;
+  }
   for (let i = 1; i < ts.length; i++) {
     const [t0, t1] = [ts[i - 1]!, ts[i]!];
     const part = ts.length === 2 ? s : segmentSlice(s, t0, t1);
@@ -241,23 +250,23 @@ function deformSegment(s: Segment, field: Field): Segment[] {
     }
     const affine = field.affineOn(part, segmentPointThen(s, (t0 + t1) / 2, asPoint));
     if (affine) out.push(segmentMapPoints(part, affine));
-    else out.push(...redrawMapped(s, t0, t1, field.smooth));
+    else {
+      const redrawn = redrawMapped(s, t0, t1, field.smooth);
+      for (let k = 0; k < redrawn.length; k++) out.push(redrawn[k]!);
+    }
   }
-  return out;
+  return true;
 }
 
 const asPoint = (x: number, y: number): Point => ({ x, y });
 
 function deformPath(path: Path, field: Field): Path {
   let changed = false;
-  const out = path.map((c) => ({
-    closed: c.closed,
-    segments: c.segments.flatMap((s) => {
-      const r = deformSegment(s, field);
-      if (r.length !== 1 || r[0] !== s) changed = true;
-      return r;
-    }),
-  }));
+  const out = path.map((c) => {
+    const segments: Segment[] = [];
+    for (let i = 0; i < c.segments.length; i++) if (deformSegmentInto(c.segments[i]!, field, segments)) changed = true;
+    return { closed: c.closed, segments };
+  });
   return changed ? out : path;
 }
 

@@ -23,7 +23,7 @@ import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
 import { type Path, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
 import { REDRAW_CHECKS, TRUE_ZONE } from '../tolerance.ts';
-import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
+import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecDot, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 const point = z.object({ x: z.number(), y: z.number() });
@@ -130,11 +130,15 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   };
 }
 
-function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRotate>): Segment[] {
+/** Push the image of a segment onto `out`; false when it is the segment itself (it lies wholly where nothing moves). */
+function mapSegmentInto(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRotate>, out: Segment[]): boolean {
   // parts between the zone's boundary lines lie wholly in one region; its middle decides, and
   // the redraw checks are probed too (a tangent touch whose root round-off lost, or a segment
   // running behind the hinge, where the angle wraps round)
-  const ts = [0, ...segmentCutTimes(s, m.cuts), 1];
+  const cuts = segmentCutTimes(s, m.cuts);
+  const ts = [0];
+  for (let i = 0; i < cuts.length; i++) ts.push(cuts[i]!);
+  ts.push(1);
   const regions: (0 | 1 | 2)[] = [];
   for (let i = 1; i < ts.length; i++) {
     const [t0, t1] = [ts[i - 1]!, ts[i]!];
@@ -142,19 +146,27 @@ function mapSegment(s: Segment, m: WedgeMap, rigid: ReturnType<typeof affineRota
     for (let k = 1; k <= REDRAW_CHECKS && region !== 2; k++) if (segmentPointThen(s, t0 + ((t1 - t0) * k) / (REDRAW_CHECKS + 1), m.regionXY) !== region) region = 2;
     regions.push(region);
   }
-  if (regions.length === 1 && regions[0] === 0) return [s];
-  if (regions.length === 1 && regions[0] === 1) return [segmentTransform(s, rigid)];
-  const out: Segment[] = [];
+  if (regions.length === 1 && regions[0] === 0) {
+    out.push(s);
+    return false;
+  }
+  if (regions.length === 1 && regions[0] === 1) {
+    out.push(segmentTransform(s, rigid));
+    return true;
+  }
   for (let i = 1; i < ts.length; i++) {
     const [t0, t1] = [ts[i - 1]!, ts[i]!];
     const region = regions[i - 1]!;
-    if (region === 2) out.push(...redrawMapped(s, t0, t1, m.smooth));
+    if (region === 2) {
+      const redrawn = redrawMapped(s, t0, t1, m.smooth);
+      for (let k = 0; k < redrawn.length; k++) out.push(redrawn[k]!);
+    }
     else {
       const part = segmentSlice(s, t0, t1);
       out.push(region === 0 ? part : segmentTransform(part, rigid));
     }
   }
-  return out;
+  return true;
 }
 
 export function performSlashSpread(pattern: Pattern, input: SlashSpreadOp): OpResult {
@@ -181,14 +193,11 @@ export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof s
   const rigid = affineRotate(side * theta, op.hinge);
   const mapPath = (p: Path): Path => {
     let changed = false;
-    const out = p.map((c) => ({
-      closed: c.closed,
-      segments: c.segments.flatMap((s) => {
-        const r = mapSegment(s, m, rigid);
-        if (r.length !== 1 || r[0] !== s) changed = true;
-        return r;
-      }),
-    }));
+    const out = p.map((c) => {
+      const segments: Segment[] = [];
+      for (let i = 0; i < c.segments.length; i++) if (mapSegmentInto(c.segments[i]!, m, rigid, segments)) changed = true;
+      return { closed: c.closed, segments };
+    });
     return changed ? out : p;
   };
   const piece: Piece = {
@@ -198,7 +207,11 @@ export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof s
       for (const p of contourFlatPoints(outlineContour(o), 0.1)) {
         const d = vecDistance(p, op.hinge);
         if (d < 1) continue;
-        const s = side * vecAngleBetween(ray, vecSub(p, op.hinge));
+        const v = vecSub(p, op.hinge);
+        // within 90° of the slash (atan2 of a non-negative x is within ±π/2) a point cannot turn
+        // past the far boundary: that takes more than π − |θ| ≥ 120°
+        if (vecDot(ray, v) >= 0) continue;
+        const s = side * vecAngleBetween(ray, v);
         if (s + theta > Math.PI - 1e-9 || (theta < 0 && s > Math.PI + theta))
           throw new AlterationError('fold', `slash-spread on "${target.name}" size "${o.size}": part of the piece lies behind the hinge near (${p.x.toFixed(1)}, ${p.y.toFixed(1)}); the wedge would fold the outline — put the hinge on the far edge`, p);
       }

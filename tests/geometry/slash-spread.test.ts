@@ -56,4 +56,14 @@ describe('slash and spread about a hinge', () => {
     expect(() => performSlashSpread(base, { op: 'slash-spread', piece: 'front', from: centre, hinge: side, angle: 1.5 })).toThrow();
     expect(() => performSlashSpread(base, { op: 'slash-spread', piece: 'sleeve', from: centre, hinge: side, angle: 0.1 })).toThrow(AlterationError);
   });
+
+  it('refuses a hinge inside the piece: the part behind it would fold over (common practice, no source: the hinge goes on the far edge)', () => {
+    const { side, centre } = slash();
+    const middle = { x: (side.x + centre.x) / 2, y: side.y };
+    for (const move of ['waist', 'hem'] as const) expect(() => performSlashSpread(base, { op: 'slash-spread', piece: 'front', from: centre, hinge: middle, angle: 0.9, move })).toThrow(/behind the hinge/);
+    // a smaller wedge there still folds the outline: refused by the self-crossing check
+    expect(() => performSlashSpread(base, { op: 'slash-spread', piece: 'front', from: centre, hinge: middle, angle: 0.3, move: 'waist' })).toThrow(/fold over itself/);
+    // the same slash hinged on the far edge is made
+    expect(() => performSlashSpread(base, { op: 'slash-spread', piece: 'front', from: centre, hinge: side, angle: 0.3, move: 'waist' })).not.toThrow();
+  });
 });
