@@ -968,9 +968,9 @@ export function contourFlattenShared(c: Contour, tolerance = FLATNESS): readonly
 }
 
 /**
- * The points of contourFlattenShared(c, tolerance) in order — the very point objects, taken from
- * the per-cubic memo and the segment ends — without FlatPoint objects and without a memo for
- * the contour (for callers that only need the points once).
+ * The points of contourFlattenShared(c, tolerance) in order (equal values; the segment ends
+ * are the very objects), without FlatPoint objects and without a memo for the contour (for
+ * callers that only need the points once).
  */
 export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
   const out: Point[] = [];
@@ -982,8 +982,14 @@ export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
       out.push(s.to);
       continue;
     }
-    const points = flatteningPoints(s, cubicFlattening(s, tolerance));
-    for (let k = 1; k < points.length; k++) out.push(points[k]!);
+    // the flattening's own points when made already, else new ones not kept with it: most
+    // callers (the seam allowance's runs, extents, the hinge check) read them once, and kept
+    // they stayed alive with the memo (most of what the garbage collector copied)
+    const f = cubicFlattening(s, tolerance);
+    const points = f.points;
+    const n = f.ts.length;
+    if (points) for (let k = 1; k < n; k++) out.push(points[k]!);
+    else for (let k = 1; k < n; k++) out.push(f.ts[k] === 1 ? s.to : { x: f.xs[k]!, y: f.ys[k]! });
   }
   if (c.closed && out.length > 1) out.pop();
   return out;
