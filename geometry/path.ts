@@ -531,7 +531,7 @@ export function pathToSvgNow(path: Path, decimals = 4): string {
 /** Write SVG path data with absolute M/L/C/Z and at most `decimals` decimals (default 4 = 0.1 µm). */
 export function pathToSvg(path: Path, decimals = 4): string {
   if (deferred && allFinite(path, decimals)) {
-    const token = `${DEFERRED_PREFIX}${deferred.run}:${deferred.issued++}`;
+    const token = deferred.prefix + deferred.issued++;
     deferred.texts.set(token, { path, decimals, read: undefined });
     return token;
   }
@@ -676,6 +676,8 @@ interface DeferredRun {
   readonly texts: Map<string, { readonly path: Path; readonly decimals: number; read: Path | undefined }>;
   /** Placeholders handed out so far (the number in the next one; entries may have been dropped by `retain`). */
   issued: number;
+  /** The placeholders' common start: DEFERRED_PREFIX, the run's number and a colon. */
+  readonly prefix: string;
   /**
    * Flattenings of cubics first flattened during the run (see cubicFlattening). Dropped at its
    * end but for the cubics of the run's input, which the next run on the same input meets again.
@@ -700,7 +702,8 @@ const DEFERRED_PREFIX = '\u0000path:';
  */
 export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string, retain: (inUse: readonly string[]) => void) => T): T {
   if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d, () => {});
-  const run: DeferredRun = { run: ++deferredRuns, texts: new Map(), issued: 0, flattenings: new Map(), flatteningsBefore: new Map() };
+  const number = ++deferredRuns;
+  const run: DeferredRun = { run: number, prefix: `${DEFERRED_PREFIX}${number}:`, texts: new Map(), issued: 0, flattenings: new Map(), flatteningsBefore: new Map() };
   deferred = run;
   try {
     return body(
@@ -741,9 +744,18 @@ function keepInputFlattenings(texts: readonly string[], flattenings: Map<Segment
 /** True when every number the path would print stays finite once rounded (other text fails differently when read). */
 function allFinite(path: Path, decimals: number): boolean {
   const k = POW10[decimals] ?? 10 ** decimals;
-  const ok = (p: Point): boolean => Number.isFinite(Math.round(p.x * k)) && Number.isFinite(Math.round(p.y * k));
-  for (const c of path) for (const s of c.segments) if (!ok(s.from) || !ok(s.to) || (s.kind === 'cubic' && (!ok(s.c1) || !ok(s.c2)))) return false;
+  for (let ci = 0; ci < path.length; ci++) {
+    const segs = path[ci]!.segments;
+    for (let i = 0; i < segs.length; i++) {
+      const s = segs[i]!;
+      if (!roundsFinite(s.from, k) || !roundsFinite(s.to, k) || (s.kind === 'cubic' && (!roundsFinite(s.c1, k) || !roundsFinite(s.c2, k)))) return false;
+    }
+  }
   return true;
+}
+
+function roundsFinite(p: Point, k: number): boolean {
+  return Number.isFinite(Math.round(p.x * k)) && Number.isFinite(Math.round(p.y * k));
 }
 
 /**
@@ -800,19 +812,24 @@ function readBackOf(path: Path, decimals: number): Path {
  * changed on reading are left as read.
  */
 function keepUnchangedSegments(path: Path, read: Path): Path {
-  const source = path.filter((c) => c.segments.length > 0);
+  let source = path;
+  for (let j = 0; j < path.length; j++)
+    if (path[j]!.segments.length === 0) {
+      source = path.filter((c) => c.segments.length > 0);
+      break;
+    }
   if (source.length !== read.length) return read;
-  return read.map((c, j) => {
+  for (let j = 0; j < read.length; j++) {
     const src = source[j]!.segments;
-    if (src.length !== c.segments.length) return c;
-    let segments: Segment[] | undefined;
+    // `read` was just built by readBackOf: its segment lists are its own, changed here in place
+    const segments = read[j]!.segments as Segment[];
+    if (src.length !== segments.length) continue;
     for (let i = 0; i < src.length; i++) {
       const a = src[i]!;
-      const b = c.segments[i]!;
-      if (sameSegment(a, b)) (segments ??= c.segments.slice())[i] = a;
+      if (a !== segments[i] && sameSegment(a, segments[i]!)) segments[i] = a;
     }
-    return segments ? { closed: c.closed, segments } : c;
-  });
+  }
+  return read;
 }
 
 /** Same kind and the very same numbers (Object.is: −0 is not 0, which atan2 would tell apart). */
@@ -951,9 +968,9 @@ export function contourFlattenShared(c: Contour, tolerance = FLATNESS): readonly
 }
 
 /**
- * The points of contourFlattenShared(c, tolerance) in order — the very point objects, taken from
- * the per-cubic memo and the segment ends — without FlatPoint objects and without a memo for
- * the contour (for callers that only need the points once).
+ * The points of contourFlattenShared(c, tolerance) in order (equal values; the segment ends
+ * are the very objects), without FlatPoint objects and without a memo for the contour (for
+ * callers that only need the points once).
  */
 export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
   const out: Point[] = [];
@@ -965,8 +982,14 @@ export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
       out.push(s.to);
       continue;
     }
-    const points = flatteningPoints(s, cubicFlattening(s, tolerance));
-    for (let k = 1; k < points.length; k++) out.push(points[k]!);
+    // the flattening's own points when made already, else new ones not kept with it: most
+    // callers (the seam allowance's runs, extents, the hinge check) read them once, and kept
+    // they stayed alive with the memo (most of what the garbage collector copied)
+    const f = cubicFlattening(s, tolerance);
+    const points = f.points;
+    const n = f.ts.length;
+    if (points) for (let k = 1; k < n; k++) out.push(points[k]!);
+    else for (let k = 1; k < n; k++) out.push(f.ts[k] === 1 ? s.to : { x: f.xs[k]!, y: f.ys[k]! });
   }
   if (c.closed && out.length > 1) out.pop();
   return out;
