@@ -603,9 +603,13 @@ class TextWriter {
   }
 
   point(q: Point, decimals: number): void {
-    this.number(q.x, decimals);
+    this.xy(q.x, q.y, decimals);
+  }
+
+  xy(x: number, y: number, decimals: number): void {
+    this.number(x, decimals);
     this.code(SPACE);
-    this.number(q.y, decimals);
+    this.number(y, decimals);
   }
 
   /** fmt(v, decimals), written digit by digit where fmt takes its fast form, else fmt's text. */
@@ -1335,7 +1339,11 @@ function segmentsMeet(ax: number, ay: number, bx: number, by: number, cx: number
  */
 function mayCross(c: Contour, tolerance: number): boolean {
   const { xs, ys, n } = flatVertices(c, tolerance);
-  const closed = c.closed;
+  return verticesMayCross(xs, ys, n, c.closed);
+}
+
+/** mayCross on the vertices flatVertices gives (n of them in xs, ys; closed: the last joins the first). */
+function verticesMayCross(xs: Float64Array, ys: Float64Array, n: number, closed: boolean): boolean {
   const edgeCount = closed ? n : n - 1;
   if (edgeCount < 3) return false;
   const minX = scratchF64(F64_SLOT.crossMinX, edgeCount);
@@ -1407,6 +1415,77 @@ function mayCross(c: Contour, tolerance: number): boolean {
 /** True when the contour is closed and neither crosses nor touches itself. */
 export function contourIsSimple(c: Contour, tolerance = FLATNESS): boolean {
   return c.closed && contourSelfCrossings(c, tolerance).length === 0;
+}
+
+/**
+ * For the closed polygon through `count` points (xs, ys), read as contourFromPoints(points, true)
+ * reads them: its text as pathToSvgNow prints it when contourIsSimple finds it simple and its
+ * signed area is positive; undefined when it is not closed, or simple with an area ≤ 0; null
+ * when the lean test finds edges that may meet (the caller then asks contourIsSimple, which
+ * lists them). Works on the coordinates: no point, segment or contour objects. The same rules
+ * step by step: contourFromPoints' dropping of points within POINT_EPSILON of the point before
+ * them and its closing line, then flatVertices' vertices of that contour, then mayCross.
+ */
+export function simplePolygonText(xs: Float64Array, ys: Float64Array, count: number, decimals: number): string | undefined | null {
+  // contourFromPoints: each point against the point before it in the input
+  const ax = scratchF64(F64_SLOT.polygonXs, count);
+  const ay = scratchF64(F64_SLOT.polygonYs, count);
+  let k = 0;
+  for (let i = 0; i < count; i++)
+    if (i === 0 || hypotAbove(xs[i]! - xs[i - 1]!, ys[i]! - ys[i - 1]!, POINT_EPSILON)) {
+      ax[k] = xs[i]!;
+      ay[k] = ys[i]!;
+      k++;
+    }
+  if (k <= 2) return undefined; // not closed: contourIsSimple says no
+  const closing = hypotAbove(ax[k - 1]! - ax[0]!, ay[k - 1]! - ay[0]!, POINT_EPSILON);
+  const segmentCount = closing ? k : k - 1;
+  // flatVertices of that contour: the segment ends in order (the start once), the last dropped
+  // (closed), then each against the one before it, and the last if it meets the first
+  const vx = scratchF64(F64_SLOT.crossXs, k + 1);
+  const vy = scratchF64(F64_SLOT.crossYs, k + 1);
+  let m = 0;
+  for (let i = 0; i <= segmentCount; i++) {
+    const j = i === k ? 0 : i; // the closing line ends at the first point
+    vx[m] = ax[j]!;
+    vy[m] = ay[j]!;
+    m++;
+  }
+  m--; // closed
+  let n = 0;
+  let px = 0;
+  let py = 0;
+  for (let i = 0; i < m; i++) {
+    const x = vx[i]!;
+    const y = vy[i]!;
+    if (i === 0 || hypotAbove(x - px, y - py, POINT_EPSILON)) {
+      vx[n] = x;
+      vy[n] = y;
+      n++;
+    }
+    px = x;
+    py = y;
+  }
+  if (n > 1 && !hypotAbove(vx[0]! - vx[n - 1]!, vy[0]! - vy[n - 1]!, POINT_EPSILON)) n--;
+  if (verticesMayCross(vx, vy, n, true)) return null;
+  // contourSignedArea: each line's share in order, the closing line last
+  let area = 0;
+  for (let i = 1; i < k; i++) area += 0.5 * (ax[i - 1]! * ay[i]! - ax[i]! * ay[i - 1]!);
+  if (closing) area += 0.5 * (ax[k - 1]! * ay[0]! - ax[0]! * ay[k - 1]!);
+  if (!(area > 0)) return undefined;
+  // writePath: M, then L to the end of every segment but the last (Z draws it), then Z
+  const w = TEXT;
+  w.length = 0;
+  w.code(CHAR_M);
+  w.xy(ax[0]!, ay[0]!, decimals);
+  for (let i = 1; i < segmentCount; i++) {
+    w.code(SPACE);
+    w.code(CHAR_L);
+    w.xy(ax[i]!, ay[i]!, decimals);
+  }
+  w.code(SPACE);
+  w.code(CHAR_Z);
+  return w.text();
 }
 
 /** A location on a contour. */

@@ -156,4 +156,8 @@ export const F64_SLOT = {
   halvesBy: 19,
   halvesLo: 20,
   halvesHi: 21,
+  cutOutX: 22,
+  cutOutY: 23,
+  polygonXs: 24,
+  polygonYs: 25,
 } as const;

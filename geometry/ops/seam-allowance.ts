@@ -23,7 +23,7 @@ import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
-import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvgNow } from '../path.ts';
+import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvgNow, simplePolygonText } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecHypot, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
@@ -221,6 +221,36 @@ const OVERLAP_SLACK = 1e-5;
 
 /** The direct construction of cutLineOf, or undefined where it cannot show that it equals the union. */
 export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceOp): Contour | undefined {
+  const joins = directJoins(piece, outline, op);
+  if (!joins) return undefined;
+  const out = new Array<Point>(joins.count);
+  for (let i = 0; i < joins.count; i++) out[i] = { x: joins.xs[i]!, y: joins.ys[i]! };
+  // `out[i]` joins chord i to chord i + 1; the polygon runs through them in order
+  const cut = contourFromPoints(out, true);
+  if (!contourIsSimple(cut) || contourSignedArea(cut) <= 0) return undefined;
+  return cut;
+}
+
+/**
+ * The text of cutLineDirect's line as pathToSvgNow([cut], 4) prints it, written from the join
+ * points without point and segment objects (the seam allowance of every outline of a pattern
+ * makes thousands); undefined where cutLineDirect gives undefined.
+ */
+function cutTextDirect(piece: Piece, outline: Outline, op: SeamAllowanceOp): string | undefined {
+  const joins = directJoins(piece, outline, op);
+  if (!joins) return undefined;
+  const text = simplePolygonText(joins.xs, joins.ys, joins.count, 4);
+  if (text !== null) return text;
+  // the lean test could not rule out a crossing: decide as cutLineDirect does
+  const cut = cutLineDirect(piece, outline, op);
+  return cut ? pathToSvgNow([cut], 4) : undefined;
+}
+
+/**
+ * The join points of the direct construction in order (scratch arrays: read them before the
+ * next call), or undefined where the checks below cannot show that it gives the union.
+ */
+function directJoins(piece: Piece, outline: Outline, op: SeamAllowanceOp): { xs: Float64Array; ys: Float64Array; count: number } | undefined {
   let contour = outlineContour(outline);
   if (contourSignedArea(contour) < 0) contour = contourReverse(contour);
   let runs: Run[];
@@ -384,14 +414,17 @@ export function cutLineDirect(piece: Piece, outline: Outline, op: SeamAllowanceO
       changed = true;
     }
   }
-  // the join points of the chords kept, in order (a list of its final size)
-  const out = new Array<Point>(kept);
-  for (let i = 0, o = 0; i < n; i++) if (prev[i] !== -1) out[o++] = { x: jx[i]!, y: jy[i]! };
-  if (!innerHalvesInside(out, n, px, py, dx, dy, len, wd, closedRun ? undefined : run)) return undefined;
-  // `out[i]` joins chord i to chord i + 1; the polygon runs through them in order
-  const cut = contourFromPoints(out, true);
-  if (!contourIsSimple(cut) || contourSignedArea(cut) <= 0) return undefined;
-  return cut;
+  // the join points of the chords kept, in order
+  const ox = scratchF64(F64_SLOT.cutOutX, kept);
+  const oy = scratchF64(F64_SLOT.cutOutY, kept);
+  for (let i = 0, o = 0; i < n; i++)
+    if (prev[i] !== -1) {
+      ox[o] = jx[i]!;
+      oy[o] = jy[i]!;
+      o++;
+    }
+  if (!innerHalvesInside(ox, oy, kept, n, px, py, dx, dy, len, wd, closedRun ? undefined : run)) return undefined;
+  return { xs: ox, ys: oy, count: kept };
 }
 
 /**
@@ -418,7 +451,9 @@ function hiddenEnd(a: number, b: number, dx: Float64Array, dy: Float64Array, len
  * cut line, is left to the union. A sweep over x on typed arrays.
  */
 function innerHalvesInside(
-  cut: readonly Point[],
+  cutX: Float64Array,
+  cutY: Float64Array,
+  c: number,
   n: number,
   px: Float64Array,
   py: Float64Array,
@@ -429,7 +464,6 @@ function innerHalvesInside(
   /** the run of each chord; undefined for one closed run (no run ends) */
   run: Int32Array | undefined,
 ): boolean {
-  const c = cut.length;
   const m = 4 * n + c;
   const ax = scratchF64(F64_SLOT.halvesAx, m);
   const ay = scratchF64(F64_SLOT.halvesAy, m);
@@ -444,9 +478,8 @@ function innerHalvesInside(
     count++;
   };
   for (let k = 0; k < c; k++) {
-    const p = cut[k]!;
-    const q = cut[k + 1 === c ? 0 : k + 1]!;
-    add(p.x, p.y, q.x, q.y);
+    const q = k + 1 === c ? 0 : k + 1;
+    add(cutX[k]!, cutY[k]!, cutX[q]!, cutY[q]!);
   }
   const probesFrom = count;
   // the sides of each kind in chord order, one kind after another (the seam chords, the inner
@@ -564,8 +597,10 @@ export function performSeamAllowance(pattern: Pattern, op: SeamAllowanceOp): OpR
     return {
       ...piece,
       outlines: piece.outlines.map((o) => {
-        const { cut, simple } = cutLineChecked(piece, o, op);
-        if (!simple) assertSimple(cut, `seam allowance of piece "${piece.name}" size "${o.size}"`);
+        const direct = cutTextDirect(piece, o, op);
+        if (direct !== undefined) return { ...o, cut: direct };
+        const cut = cutLineByUnion(piece, o, op);
+        assertSimple(cut, `seam allowance of piece "${piece.name}" size "${o.size}"`);
         return { ...o, cut: pathToSvgNow([cut], 4) };
       }),
     };

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatPerimeter, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatPerimeter, contourIsSimple, contourSignedArea, pathToSvgNow, simplePolygonText, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -180,6 +180,51 @@ describe('pathToSvg text (written as character codes)', () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe('simplePolygonText (a cut line written from its coordinates)', () => {
+  it('gives the text of contourFromPoints(points, true) when that is simple with a positive area, else undefined (or null: the lean test cannot tell)', () => {
+    // points on a rough circle (simple, either way round), with repeats, near-repeats and jumps (crossings)
+    const polygon = fc
+      .record({
+        count: fc.integer({ min: 1, max: 40 }),
+        radius: fc.double({ min: 1, max: 500, noNaN: true }),
+        reverse: fc.boolean(),
+        noise: fc.array(fc.tuple(fc.double({ min: -0.3, max: 0.3, noNaN: true }), fc.constantFrom(0, 0, 0, 1, 2, 3)), { minLength: 40, maxLength: 40 }),
+      })
+      .map(({ count, radius, reverse, noise }) => {
+        const pts: Point[] = [];
+        for (let i = 0; i < count; i++) {
+          const [jitter, kind] = noise[i]!;
+          const a = ((reverse ? -1 : 1) * 2 * Math.PI * i) / count + jitter / count;
+          const p = { x: radius * Math.cos(a), y: radius * Math.sin(a) };
+          if (kind === 1 && pts.length > 0) pts.push({ ...pts[pts.length - 1]! }); // a repeat
+          else if (kind === 2 && pts.length > 0) pts.push({ x: pts[pts.length - 1]!.x + POINT_EPSILON / 3, y: pts[pts.length - 1]!.y }); // within POINT_EPSILON
+          else if (kind === 3) pts.push({ x: -p.x, y: -p.y }); // across the middle: crossings
+          else pts.push(p);
+        }
+        if (noise[0]![1] === 1 && pts.length > 1) pts.push({ ...pts[0]! }); // the start again at the end
+        return pts;
+      });
+    const seen = { simple: 0, not: 0 };
+    fc.assert(
+      fc.property(polygon, fc.constantFrom(4, 6), (points, decimals) => {
+        const xs = new Float64Array(points.map((p) => p.x));
+        const ys = new Float64Array(points.map((p) => p.y));
+        const text = simplePolygonText(xs, ys, points.length, decimals);
+        const contour = contourFromPoints(points, true);
+        const simple = contourIsSimple(contour) && contourSignedArea(contour) > 0;
+        if (text === null) return; // the caller asks contourIsSimple itself
+        seen[simple ? 'simple' : 'not']++;
+        if (simple) expect(text).toBe(pathToSvgNow([contour], decimals));
+        else expect(text).toBeUndefined();
+      }),
+      { numRuns: 3000 },
+    );
+    // both answers were checked, many times
+    expect(seen.simple).toBeGreaterThan(100);
+    expect(seen.not).toBeGreaterThan(100);
   });
 });
 
