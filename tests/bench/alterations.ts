@@ -5,7 +5,7 @@
  * Baseline: a JSON round trip of the demo pattern, a fixed workload of the same process.
  */
 import { applyOps, demoPattern, type AlterationOp } from '../../geometry/index.ts';
-import { bench, report } from './harness.ts';
+import { benchInterleaved, report } from './harness.ts';
 
 export const BLEND: AlterationOp = {
   op: 'blend',
@@ -37,12 +37,14 @@ export async function alterationsBench(): Promise<void> {
   applyOps(blended, STACK);
   applyOps(pattern, STACK);
 
-  const baseline = await bench('JSON round trip of the demo pattern', () => JSON.parse(JSON.stringify(pattern)));
-  const rows = [
-    { ...(await bench('blend (11 size lines → 1)', () => applyOps(pattern, [BLEND]))) },
-    { ...(await bench('10-op stack on the blended pattern', () => applyOps(blended, STACK))), targetMs: 5 },
-    { ...(await bench('10-op stack on all 11 size lines', () => applyOps(pattern, STACK))), targetMs: 30 },
-    { ...(await bench('blend + 10-op stack (a full replay)', () => applyOps(pattern, [BLEND, ...STACK]))) },
-  ];
-  report('Alteration engine, demo pattern (6 pieces)', baseline, rows);
+  // measured in turns (benchInterleaved): this machine's speed drifts over seconds
+  const [baseline, blend, stackBlended, stackAll, replay] = await benchInterleaved([
+    { name: 'JSON round trip of the demo pattern', fn: () => JSON.parse(JSON.stringify(pattern)) },
+    { name: 'blend (11 size lines → 1)', fn: () => applyOps(pattern, [BLEND]) },
+    { name: '10-op stack on the blended pattern', fn: () => applyOps(blended, STACK) },
+    { name: '10-op stack on all 11 size lines', fn: () => applyOps(pattern, STACK) },
+    { name: 'blend + 10-op stack (a full replay)', fn: () => applyOps(pattern, [BLEND, ...STACK]) },
+  ]);
+  const rows = [{ ...blend! }, { ...stackBlended!, targetMs: 5 }, { ...stackAll!, targetMs: 30 }, { ...replay! }];
+  report('Alteration engine, demo pattern (6 pieces), cases measured in turns', baseline!, rows);
 }

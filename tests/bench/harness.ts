@@ -42,6 +42,40 @@ export async function bench(name: string, fn: () => unknown, options: BenchOptio
   };
 }
 
+export interface BenchCase {
+  name: string;
+  fn: () => unknown;
+}
+
+/**
+ * Several cases measured in turns: `rounds` rounds, each giving every case a slice of about
+ * `sliceMs` (the order rotated from round to round), after a warm-up of each. On a shared
+ * machine whose speed drifts over seconds, every case (the baseline too) then sees the same mix
+ * of fast and slow spells, so the ratios to the baseline and the medians compare fairly; one
+ * case after another, a case could fall wholly into a slow spell.
+ */
+export async function benchInterleaved(cases: readonly BenchCase[], options: { rounds?: number; sliceMs?: number; warmup?: number } = {}): Promise<BenchResult[]> {
+  const { rounds = 8, sliceMs = 250, warmup = 5 } = options;
+  for (const c of cases) for (let i = 0; i < warmup; i++) await c.fn();
+  const times: number[][] = cases.map(() => []);
+  for (let r = 0; r < rounds; r++)
+    for (let k = 0; k < cases.length; k++) {
+      const index = (k + r) % cases.length;
+      const c = cases[index]!;
+      const start = performance.now();
+      do {
+        const t0 = performance.now();
+        await c.fn();
+        times[index]!.push(performance.now() - t0);
+      } while (performance.now() - start < sliceMs);
+    }
+  return cases.map((c, index) => {
+    const sorted = [...times[index]!].sort((a, b) => a - b);
+    const medianMs = sorted[Math.floor(sorted.length / 2)]!;
+    return { name: c.name, runs: sorted.length, medianMs, p90Ms: sorted[Math.floor(sorted.length * 0.9)]!, opsPerSecond: 1000 / medianMs };
+  });
+}
+
 const fmt = (n: number, digits = 3) => n.toPrecision(digits);
 
 /** Print a table: median, p90, operations per second, ratio to the baseline, and the target if any. */
