@@ -999,6 +999,51 @@ export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
   return out;
 }
 
+/** How many points contourFlatPoints(c, tolerance) gives. */
+export function contourFlatCount(c: Contour, tolerance = FLATNESS): number {
+  const segs = c.segments;
+  if (segs.length === 0) return 0;
+  let m = 1;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    m += s.kind === 'line' ? 1 : cubicFlattening(s, tolerance).ts.length - 1;
+  }
+  return c.closed && m > 1 ? m - 1 : m;
+}
+
+/**
+ * The points of contourFlatPoints(c, tolerance) as coordinates, written into xs and ys from
+ * index `at` (room for contourFlatCount of them); returns the index after the last.
+ */
+export function contourFlatInto(c: Contour, tolerance: number, xs: Float64Array, ys: Float64Array, at: number): number {
+  let m = at;
+  const segs = c.segments;
+  for (let i = 0; i < segs.length; i++) {
+    const s = segs[i]!;
+    if (i === 0) {
+      xs[m] = s.from.x;
+      ys[m] = s.from.y;
+      m++;
+    }
+    if (s.kind === 'line') {
+      xs[m] = s.to.x;
+      ys[m] = s.to.y;
+      m++;
+      continue;
+    }
+    const f = cubicFlattening(s, tolerance);
+    const n = f.ts.length;
+    for (let k = 1; k < n; k++) {
+      const end = f.ts[k] === 1;
+      xs[m] = end ? s.to.x : f.xs[k]!;
+      ys[m] = end ? s.to.y : f.ys[k]!;
+      m++;
+    }
+  }
+  if (c.closed && m - at > 1) m--;
+  return m;
+}
+
 /**
  * The length of contourFlatPoints(c, tolerance) taken as a closed polygon: the chords between
  * its points in order, then the one from its last point back to its first, summed in that

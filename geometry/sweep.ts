@@ -131,7 +131,7 @@ export function scratchI32(slot: number, n: number): Int32Array {
 const ORDER_A = 0;
 const ORDER_B = 1;
 const ORDER_RUNS = 8;
-export const I32_SLOT = { crossActive: 2, cutRun: 3, cutNext: 4, cutPrev: 5, halvesEdges: 6, halvesProbes: 7 } as const;
+export const I32_SLOT = { crossActive: 2, cutRun: 3, cutNext: 4, cutPrev: 5, halvesEdges: 6, halvesProbes: 7, runStart: 9 } as const;
 /** Float64 slots: the self-crossing sweep's vertices and boxes, the direct cut line's chords, joins and half-band sides. */
 export const F64_SLOT = {
   crossXs: 0,
@@ -160,4 +160,6 @@ export const F64_SLOT = {
   cutOutY: 23,
   polygonXs: 24,
   polygonYs: 25,
+  runXs: 26,
+  runYs: 27,
 } as const;

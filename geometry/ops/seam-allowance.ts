@@ -23,7 +23,7 @@ import { z } from 'zod';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
 import { F64_SLOT, I32_SLOT, orderByKey, scratchF64, scratchI32 } from '../sweep.ts';
-import { type Contour, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvgNow, simplePolygonText } from '../path.ts';
+import { type Contour, contourFlatCount, contourFlatInto, contourFlatPerimeter, contourFlatPoints, contourFromPoints, contourIsSimple, contourNearest, contourReverse, contourSignedArea, contourStretch, pathToSvgNow, simplePolygonText } from '../path.ts';
 import { type Point, vecAdd, vecCross, vecDistance, vecHypot, vecNormalize, vecPerp, vecScale, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple } from './common.ts';
 
@@ -58,8 +58,15 @@ function toPathD(points: readonly Point[]): PathD {
   return points.map((p) => ({ x: p.x, y: p.y }));
 }
 
-/** Split a clockwise contour into runs of equal width, one per edge, in order. */
-function runsOf(piece: Piece, outline: Outline, contour: Contour, op: SeamAllowanceOp): Run[] {
+/** A stretch of the loop with its width; `whole`: the loop itself (no edge found), closed. */
+interface Stretch {
+  readonly contour: Contour;
+  readonly width: number;
+  readonly whole: boolean;
+}
+
+/** Split a clockwise contour into stretches of equal width, one per edge, in order (see runsOf). */
+function stretchesOf(piece: Piece, outline: Outline, contour: Contour, op: SeamAllowanceOp): Stretch[] {
   const widthOf = (name: string, role: string): number => effective(op.edges?.[name] ?? op.edges?.[role] ?? op.width);
   const marks = piece.edges
     .map((e) => {
@@ -68,20 +75,52 @@ function runsOf(piece: Piece, outline: Outline, contour: Contour, op: SeamAllowa
       return a && b ? { from: contourNearest(contour, a), to: contourNearest(contour, b), w: widthOf(e.name, e.role) } : undefined;
     })
     .filter((x) => x !== undefined);
-  if (marks.length === 0) {
-    const pts = contourFlatPoints(contour, CUT_FLATNESS);
-    return [{ points: [...pts, pts[0]!], width: effective(op.width) }];
-  }
+  if (marks.length === 0) return [{ contour, width: effective(op.width), whole: true }];
   // walk the loop from the first edge's start; gaps between edges get the default width
   const order = [...marks].sort((p, q) => p.from.segmentIndex - q.from.segmentIndex || p.from.t - q.from.t);
-  const runs: Run[] = [];
+  const stretches: Stretch[] = [];
   order.forEach((m, i) => {
     const next = order[(i + 1) % order.length]!;
     const edge = contourStretch(contour, m.from, m.to);
-    if (edge.segments.length > 0) runs.push({ points: flatOpen(edge), width: m.w });
-    if (vecDistance(m.to.point, next.from.point) > 1e-6) runs.push({ points: flatOpen(contourStretch(contour, m.to, next.from)), width: effective(op.width) });
+    if (edge.segments.length > 0) stretches.push({ contour: edge, width: m.w, whole: false });
+    if (vecDistance(m.to.point, next.from.point) > 1e-6) stretches.push({ contour: contourStretch(contour, m.to, next.from), width: effective(op.width), whole: false });
   });
-  return runs;
+  return stretches;
+}
+
+/** Split a clockwise contour into runs of equal width, one per edge, in order. */
+function runsOf(piece: Piece, outline: Outline, contour: Contour, op: SeamAllowanceOp): Run[] {
+  return stretchesOf(piece, outline, contour, op).map((st) => {
+    if (!st.whole) return { points: flatOpen(st.contour), width: st.width };
+    const pts = contourFlatPoints(st.contour, CUT_FLATNESS);
+    return { points: [...pts, pts[0]!], width: st.width };
+  });
+}
+
+/**
+ * The runs of runsOf as coordinates (the same numbers, no point objects): the points of run r
+ * are xs/ys[start[r] … start[r + 1] − 1] (scratch arrays: read them before the next call).
+ */
+function runCoordinates(stretches: readonly Stretch[]): { xs: Float64Array; ys: Float64Array; start: Int32Array } {
+  let total = 0;
+  for (const st of stretches) total += contourFlatCount(st.contour, CUT_FLATNESS) + (st.whole ? 1 : 0);
+  const xs = scratchF64(F64_SLOT.runXs, total);
+  const ys = scratchF64(F64_SLOT.runYs, total);
+  const start = scratchI32(I32_SLOT.runStart, stretches.length + 1);
+  let at = 0;
+  stretches.forEach((st, r) => {
+    start[r] = at;
+    const first = at;
+    at = contourFlatInto(st.contour, CUT_FLATNESS, xs, ys, at);
+    if (st.whole && at > first) {
+      // the loop's first point again at its end, as runsOf adds it
+      xs[at] = xs[first]!;
+      ys[at] = ys[first]!;
+      at++;
+    }
+  });
+  start[stretches.length] = at;
+  return { xs, ys, start };
 }
 
 /**
@@ -253,26 +292,29 @@ function cutTextDirect(piece: Piece, outline: Outline, op: SeamAllowanceOp): str
 function directJoins(piece: Piece, outline: Outline, op: SeamAllowanceOp): { xs: Float64Array; ys: Float64Array; count: number } | undefined {
   let contour = outlineContour(outline);
   if (contourSignedArea(contour) < 0) contour = contourReverse(contour);
-  let runs: Run[];
+  let stretches: Stretch[];
   let closedRun = false;
   if (piece.edges.length === 0) {
-    const pts = contourFlatPoints(contour, CUT_FLATNESS);
-    runs = [{ points: [...pts, pts[0]!], width: effective(op.width) }];
+    stretches = [{ contour, width: effective(op.width), whole: true }];
     closedRun = true;
-  } else {
-    runs = runsOf(piece, outline, contour, op);
-    if (runs.length === 0) return undefined;
+  } else stretches = stretchesOf(piece, outline, contour, op);
+  // the runs' points as coordinates: run r is rx/ry[rs[r] … rs[r + 1] − 1]
+  const { xs: rx, ys: ry, start: rs } = runCoordinates(stretches);
+  const runCount = stretches.length;
+  if (!closedRun) {
+    if (runCount === 0) return undefined;
     // the runs must tile the loop once, end to start (their length is checked with the chords below)
-    for (let r = 0; r < runs.length; r++) {
-      const pts = runs[r]!.points;
-      if (pts.length < 2) return undefined;
-      const next = runs[(r + 1) % runs.length]!.points;
-      if (vecDistance(pts[pts.length - 1]!, next[0]!) > 1e-6) return undefined;
+    for (let r = 0; r < runCount; r++) {
+      const first = rs[r]!;
+      const end = rs[r + 1]!;
+      if (end - first < 2) return undefined;
+      const nextFirst = rs[r + 1 === runCount ? 0 : r + 1]!;
+      if (vecHypot(rx[end - 1]! - rx[nextFirst]!, ry[end - 1]! - ry[nextFirst]!) > 1e-6) return undefined;
     }
   }
   // chords: seam start (px, py), unit direction (dx, dy), length, width, run index
   let count = 0;
-  for (const r of runs) count += r.points.length - 1;
+  for (let r = 0; r < runCount; r++) count += rs[r + 1]! - rs[r]! - 1;
   const px = scratchF64(F64_SLOT.cutPx, count);
   const py = scratchF64(F64_SLOT.cutPy, count);
   const dx = scratchF64(F64_SLOT.cutDx, count);
@@ -283,24 +325,26 @@ function directJoins(piece: Piece, outline: Outline, op: SeamAllowanceOp): { xs:
   let k = 0;
   // the length of the runs, chord by chord in order (each chord's length is its vecDistance: hypot is symmetric)
   let total = 0;
-  runs.forEach((r, ri) => {
-    const pts = r.points;
-    for (let i = 1; i < pts.length; i++) {
-      const a = pts[i - 1]!;
-      const b = pts[i]!;
-      const l = vecHypot(b.x - a.x, b.y - a.y);
+  for (let ri = 0; ri < runCount; ri++) {
+    const width = stretches[ri]!.width;
+    for (let i = rs[ri]! + 1; i < rs[ri + 1]!; i++) {
+      const ax = rx[i - 1]!;
+      const ay = ry[i - 1]!;
+      const bx = rx[i]!;
+      const by = ry[i]!;
+      const l = vecHypot(bx - ax, by - ay);
       total += l;
       if (!(l > 1e-9)) continue;
-      px[k] = a.x;
-      py[k] = a.y;
-      dx[k] = (b.x - a.x) / l;
-      dy[k] = (b.y - a.y) / l;
+      px[k] = ax;
+      py[k] = ay;
+      dx[k] = (bx - ax) / l;
+      dy[k] = (by - ay) / l;
       len[k] = l;
-      wd[k] = r.width;
+      wd[k] = width;
       run[k] = ri;
       k++;
     }
-  });
+  }
   if (!closedRun) {
     // ... and together as long as the flattened loop
     const perimeter = contourFlatPerimeter(contour, CUT_FLATNESS);

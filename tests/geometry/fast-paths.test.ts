@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatPerimeter, contourIsSimple, contourSignedArea, pathToSvgNow, simplePolygonText, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatCount, contourFlatInto, contourFlatPerimeter, contourIsSimple, contourSignedArea, pathToSvgNow, simplePolygonText, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -350,6 +350,33 @@ describe('contourFlatPerimeter', () => {
         let perimeter = 0;
         for (let i = 0; i < flat.length; i++) perimeter += Math.hypot(flat[i]!.x - flat[(i + 1) % flat.length]!.x, flat[i]!.y - flat[(i + 1) % flat.length]!.y);
         expect(contourFlatPerimeter(contour, tolerance)).toBe(perimeter);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe('contourFlatInto / contourFlatCount (flattened points as coordinates)', () => {
+  it('write the numbers of contourFlatPoints, as many, after any offset', () => {
+    const segment = fc.tuple(point, point, fc.boolean());
+    fc.assert(
+      fc.property(point, fc.array(segment, { minLength: 0, maxLength: 6 }), fc.boolean(), fc.constantFrom(0.01, 0.02, 0.05), fc.nat(5), (start, parts, closed, tolerance, at) => {
+        let from = start;
+        const segments = parts.map(([c, to, straight]) => {
+          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
+          from = to;
+          return s;
+        });
+        const contour: Contour = { closed, segments };
+        const flat = contourFlatPoints(contour, tolerance);
+        expect(contourFlatCount(contour, tolerance)).toBe(flat.length);
+        const xs = new Float64Array(at + flat.length);
+        const ys = new Float64Array(at + flat.length);
+        expect(contourFlatInto(contour, tolerance, xs, ys, at)).toBe(at + flat.length);
+        flat.forEach((p, i) => {
+          expect(Object.is(xs[at + i], p.x)).toBe(true);
+          expect(Object.is(ys[at + i], p.y)).toBe(true);
+        });
       }),
       { numRuns: 300 },
     );
