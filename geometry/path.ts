@@ -1332,7 +1332,15 @@ function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Fl
     }
   }
   if (c.closed && m > 1) m--;
-  // the filter of contourSelfCrossings: each raw vertex against the raw vertex before it
+  return { xs, ys, n: dropNearRepeats(xs, ys, m, c.closed) };
+}
+
+/**
+ * The filter of contourSelfCrossings on m raw vertices, in place: each vertex within
+ * POINT_EPSILON of the raw vertex before it is dropped, and (closed) the last one when it is
+ * that near the first. Returns how many are left.
+ */
+function dropNearRepeats(xs: Float64Array, ys: Float64Array, m: number, closed: boolean): number {
   let n = 0;
   let px = 0;
   let py = 0;
@@ -1347,8 +1355,8 @@ function flatVertices(c: Contour, tolerance: number): { xs: Float64Array; ys: Fl
     px = x;
     py = y;
   }
-  if (c.closed && n > 1 && !hypotAbove(xs[0]! - xs[n - 1]!, ys[0]! - ys[n - 1]!, POINT_EPSILON)) n--;
-  return { xs, ys, n };
+  if (closed && n > 1 && !hypotAbove(xs[0]! - xs[n - 1]!, ys[0]! - ys[n - 1]!, POINT_EPSILON)) n--;
+  return n;
 }
 
 /**
@@ -1497,21 +1505,7 @@ export function simplePolygonText(xs: Float64Array, ys: Float64Array, count: num
     m++;
   }
   m--; // closed
-  let n = 0;
-  let px = 0;
-  let py = 0;
-  for (let i = 0; i < m; i++) {
-    const x = vx[i]!;
-    const y = vy[i]!;
-    if (i === 0 || hypotAbove(x - px, y - py, POINT_EPSILON)) {
-      vx[n] = x;
-      vy[n] = y;
-      n++;
-    }
-    px = x;
-    py = y;
-  }
-  if (n > 1 && !hypotAbove(vx[0]! - vx[n - 1]!, vy[0]! - vy[n - 1]!, POINT_EPSILON)) n--;
+  const n = dropNearRepeats(vx, vy, m, true);
   if (verticesMayCross(vx, vy, n, true)) return null;
   // contourSignedArea: each line's share in order, the closing line last
   let area = 0;

@@ -13,6 +13,17 @@ const coord = fc.double({ min: -2000, max: 2000, noNaN: true });
 const point = fc.record({ x: coord, y: coord });
 const cubic = fc.tuple(point, point, point, point) as fc.Arbitrary<Cubic>;
 
+/** A contour of lines and cubics end to end from `start` (a cubic's second control point halfway to its end, level with the first). */
+function chain(start: Point, parts: readonly (readonly [Point, Point, boolean])[], closed: boolean): Contour {
+  let from = start;
+  const segments = parts.map(([c, to, straight]): Segment => {
+    const s: Segment = straight ? { kind: 'line', from, to } : { kind: 'cubic', from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
+    from = to;
+    return s;
+  });
+  return { closed, segments };
+}
+
 /** The plain recursion: split at ½ until the control points lie within `tolerance` of the chord. */
 function referenceFlattenTimes(c: Cubic, tolerance: number): number[] {
   const dist = (p: Point, a: Point, b: Point): number => {
@@ -233,15 +244,7 @@ describe('contourNearest (memo)', () => {
     const segment = fc.tuple(point, point, fc.boolean());
     fc.assert(
       fc.property(point, fc.array(segment, { minLength: 1, maxLength: 6 }), point, (start, parts, p) => {
-        let from = start;
-        const contour: Contour = {
-          closed: false,
-          segments: parts.map(([c, to, straight]) => {
-            const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
-            from = to;
-            return s;
-          }),
-        };
+        const contour = chain(start, parts, false);
         // reference: the nearest point of every segment, no pruning
         let best = Infinity;
         for (const s of contour.segments) {
@@ -284,13 +287,8 @@ describe('contourNearest (a point on the contour)', () => {
     const segment = fc.tuple(point, point, fc.boolean());
     fc.assert(
       fc.property(point, fc.array(segment, { minLength: 1, maxLength: 6 }), fc.nat(), fc.boolean(), (start, parts, pick, closed) => {
-        let from = start;
-        const segments = parts.map(([c, to, straight]) => {
-          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
-          from = to;
-          return s;
-        });
-        const contour: Contour = { closed, segments };
+        const contour = chain(start, parts, closed);
+        const segments = contour.segments;
         // a vertex (an end point of two segments), as landmarks are; asked with a fresh object each time
         const v = pick % 2 === 0 ? segments[pick % segments.length]!.from : segments[pick % segments.length]!.to;
         const p = { x: v.x, y: v.y };
@@ -339,13 +337,7 @@ describe('contourFlatPerimeter', () => {
     const segment = fc.tuple(point, point, fc.boolean());
     fc.assert(
       fc.property(point, fc.array(segment, { minLength: 0, maxLength: 6 }), fc.boolean(), fc.constantFrom(0.01, 0.02, 0.05), (start, parts, closed, tolerance) => {
-        let from = start;
-        const segments = parts.map(([c, to, straight]) => {
-          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
-          from = to;
-          return s;
-        });
-        const contour: Contour = { closed, segments };
+        const contour = chain(start, parts, closed);
         const flat = contourFlatPoints(contour, tolerance);
         let perimeter = 0;
         for (let i = 0; i < flat.length; i++) perimeter += Math.hypot(flat[i]!.x - flat[(i + 1) % flat.length]!.x, flat[i]!.y - flat[(i + 1) % flat.length]!.y);
@@ -361,13 +353,7 @@ describe('contourFlatInto / contourFlatCount (flattened points as coordinates)',
     const segment = fc.tuple(point, point, fc.boolean());
     fc.assert(
       fc.property(point, fc.array(segment, { minLength: 0, maxLength: 6 }), fc.boolean(), fc.constantFrom(0.01, 0.02, 0.05), fc.nat(5), (start, parts, closed, tolerance, at) => {
-        let from = start;
-        const segments = parts.map(([c, to, straight]) => {
-          const s = straight ? { kind: 'line' as const, from, to } : { kind: 'cubic' as const, from, c1: c, c2: { x: (c.x + to.x) / 2, y: c.y }, to };
-          from = to;
-          return s;
-        });
-        const contour: Contour = { closed, segments };
+        const contour = chain(start, parts, closed);
         const flat = contourFlatPoints(contour, tolerance);
         expect(contourFlatCount(contour, tolerance)).toBe(flat.length);
         const xs = new Float64Array(at + flat.length);
