@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { formatLength, LengthParseError, parseLength, type LengthUnit } from '../../../geometry/index.ts';
 import { cx } from '../../lib/cx';
+import { FieldLabel } from './field-label';
 
 type LengthFieldProps = {
   label: string;
@@ -46,10 +47,7 @@ export function LengthField({ label, valueMm, unit, onCommit, hint, signed, clas
 
   return (
     <div className={cx('flex flex-col gap-1', className)}>
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      {hint && <p className="text-xs text-ink-500">{hint}</p>}
+      <FieldLabel htmlFor={id} label={label} hint={hint} />
       <input
         id={id}
         inputMode="text"

@@ -1,6 +1,8 @@
 import { useId } from 'react';
 import { formatLength, parseLength, type LengthUnit } from '../../../geometry/units';
 import { cx } from '../../lib/cx';
+import { FieldError } from './field-error';
+import { FieldLabel } from './field-label';
 
 /** What a typed length reads as in the person's units, or null when it is blank or not a length. */
 function readBack(text: string, unit: LengthUnit): string | null {
@@ -46,14 +48,7 @@ export function LengthInput({
   const readsAsId = shown && shown !== value.trim() ? `${id}-reads` : undefined;
   return (
     <div className={cx('flex flex-col gap-1', className)}>
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      {hint && (
-        <p id={hintId} className="text-xs text-ink-500">
-          {hint}
-        </p>
-      )}
+      <FieldLabel htmlFor={id} label={label} hint={hint} hintId={hintId} />
       <input
         id={id}
         name={name}
@@ -73,23 +68,7 @@ export function LengthInput({
           Reads as {shown}
         </p>
       )}
-      {error && (
-        <p id={errorId} className="flex items-start gap-1.5 text-sm font-medium text-madder-700">
-          <span aria-hidden className="mt-1.5 size-2 shrink-0 rotate-45 bg-madder-700" />
-          {error}
-        </p>
-      )}
+      <FieldError id={errorId}>{error}</FieldError>
     </div>
-  );
-}
-
-/** A message under a group of fields, in the look of the shared fields' errors. */
-export function FieldError({ id, children }: { id?: string; children?: string }) {
-  if (!children) return null;
-  return (
-    <p id={id} className="flex items-start gap-1.5 text-sm font-medium text-madder-700">
-      <span aria-hidden className="mt-1.5 size-2 shrink-0 rotate-45 bg-madder-700" />
-      {children}
-    </p>
   );
 }

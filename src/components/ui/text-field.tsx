@@ -1,5 +1,7 @@
 import { useId, type InputHTMLAttributes, type Ref } from 'react';
 import { cx } from '../../lib/cx';
+import { FieldError } from './field-error';
+import { FieldLabel } from './field-label';
 
 type TextFieldProps = Omit<InputHTMLAttributes<HTMLInputElement>, 'id'> & {
   label: string;
@@ -18,14 +20,7 @@ export function TextField({ label, hint, error, className, ref, ...input }: Text
 
   return (
     <div className={cx('flex flex-col gap-1', className)}>
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      {hint && (
-        <p id={hintId} className="text-xs text-ink-500">
-          {hint}
-        </p>
-      )}
+      <FieldLabel htmlFor={id} label={label} hint={hint} hintId={hintId} />
       <input
         id={id}
         ref={ref}
@@ -38,12 +33,7 @@ export function TextField({ label, hint, error, className, ref, ...input }: Text
         )}
         {...input}
       />
-      {error && (
-        <p id={errorId} className="flex items-start gap-1.5 text-sm font-medium text-madder-700">
-          <span aria-hidden className="mt-1.5 size-2 shrink-0 rotate-45 bg-madder-700" />
-          {error}
-        </p>
-      )}
+      <FieldError id={errorId}>{error}</FieldError>
     </div>
   );
 }

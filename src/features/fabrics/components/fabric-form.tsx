@@ -20,7 +20,9 @@ import {
   type ShrinkageDraft,
   type StretchDraft,
 } from '../model';
-import { FieldError, LengthInput } from '../../../components/ui/length-input';
+import { FieldError } from '../../../components/ui/field-error';
+import { FieldLabel } from '../../../components/ui/field-label';
+import { LengthInput } from '../../../components/ui/length-input';
 
 const controlClasses = (invalid: boolean) =>
   cx(
@@ -53,14 +55,7 @@ function NumberInput({
   const id = useId();
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      {hint && (
-        <p id={`${id}-hint`} className="text-xs text-ink-500">
-          {hint}
-        </p>
-      )}
+      <FieldLabel htmlFor={id} label={label} hint={hint} hintId={`${id}-hint`} />
       <div className="flex items-center gap-2">
         <input
           id={id}

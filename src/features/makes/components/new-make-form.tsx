@@ -1,5 +1,6 @@
 import { useId, useMemo, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
+import { FieldError } from '../../../components/ui/field-error';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { useFormErrors } from '../../../components/ui/use-form-errors';
@@ -23,16 +24,6 @@ const selectClasses = (invalid: boolean) =>
     'rounded-md border bg-calico-50 px-3 py-2 text-base text-ink-900 focus:border-denim-600 focus:outline-none focus:ring-2 focus:ring-tape-400',
     invalid ? 'border-madder-700' : 'border-calico-400',
   );
-
-function FieldError({ id, children }: { id: string; children?: string }) {
-  if (!children) return null;
-  return (
-    <p id={id} className="flex items-start gap-1.5 text-sm font-medium text-madder-700">
-      <span aria-hidden className="mt-1.5 size-2 shrink-0 rotate-45 bg-madder-700" />
-      {children}
-    </p>
-  );
-}
 
 function patternLabel(pattern: PatternChoice): string {
   const sizes = pattern.sizes.length > 0 ? `sizes ${pattern.sizes.join(', ')}` : 'no sizes named';

@@ -1,6 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useId, useState, type FormEvent, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
+import { FieldLabel } from '../../../components/ui/field-label';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { TextField } from '../../../components/ui/text-field';
 import { useFormErrors } from '../../../components/ui/use-form-errors';
@@ -45,14 +46,7 @@ function SelectField({
   const id = useId();
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      {hint && (
-        <p id={`${id}-hint`} className="text-xs text-ink-500">
-          {hint}
-        </p>
-      )}
+      <FieldLabel htmlFor={id} label={label} hint={hint} hintId={`${id}-hint`} />
       <select
         id={id}
         name={name}

@@ -5,7 +5,8 @@ import { cx } from '../../../lib/cx';
 import { girthAtHeightHowTo, girthsAtHeightsWhy, measurementHelp, measuringCaution } from '../measurement-help';
 import { MEASUREMENT_NAMES, type MeasurementName } from '../../../types/measurement-names';
 import { MAX_NOTE_LENGTH, todayIso, type FieldErrors, type GirthRowDraft, type MeasurementsDraft } from '../model';
-import { FieldError, LengthInput } from '../../../components/ui/length-input';
+import { FieldError } from '../../../components/ui/field-error';
+import { LengthInput } from '../../../components/ui/length-input';
 
 const controlClasses = (invalid: boolean) =>
   cx(
