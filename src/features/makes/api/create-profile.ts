@@ -17,10 +17,12 @@ export function useCreateProfile({ onSuccess }: { onSuccess?: (profile: Profile)
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createProfile,
-    onSuccess: (profile) => {
+    onSuccess: async (profile) => {
       queryClient.setQueryData<Profile[]>(profileKeys.list(), (profiles) =>
         profiles ? [...profiles, profile] : [profile],
       );
+      // the Fit planner's lists sit under the same root: they are refetched too
+      await queryClient.invalidateQueries({ queryKey: profileKeys.all });
       onSuccess?.(profile);
     },
   });
