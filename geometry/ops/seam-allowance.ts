@@ -216,8 +216,8 @@ export function cutLineByUnion(piece: Piece, outline: Outline, op: SeamAllowance
 
 /**
  * The cut line, built directly where that gives the outer boundary of the union above, else by
- * the union (cutLineByUnion). `simple` says the line was checked to be simple by
- * contourIsSimple (the check assertSimple makes), so the caller need not check it again.
+ * the union (cutLineByUnion). A direct line has been found simple by contourIsSimple (the
+ * check assertSimple makes); performSeamAllowance checks only a line drawn by the union.
  *
  * The direct construction offsets every chord of the flattened seam line outward by its run's
  * width and joins neighbouring offset chords where their lines meet: at a convex join that is
@@ -244,13 +244,7 @@ export function cutLineByUnion(piece: Piece, outline: Outline, op: SeamAllowance
  * two on the demo pattern after random alteration stacks and on random shapes.
  */
 export function cutLineOf(piece: Piece, outline: Outline, op: SeamAllowanceOp): Contour {
-  return cutLineChecked(piece, outline, op).cut;
-}
-
-function cutLineChecked(piece: Piece, outline: Outline, op: SeamAllowanceOp): { cut: Contour; simple: boolean } {
-  const direct = cutLineDirect(piece, outline, op);
-  if (direct) return { cut: direct, simple: true };
-  return { cut: cutLineByUnion(piece, outline, op), simple: false };
+  return cutLineDirect(piece, outline, op) ?? cutLineByUnion(piece, outline, op);
 }
 
 /** Largest trimming of an offset chord past its other end (mm) still taken as none: round-off. */
