@@ -204,7 +204,8 @@ export function cubicFlattenTimes(c: Cubic, tolerance = FLATNESS): number[] {
   // step, so the parameters are exactly those of the plain recursion. The recursion runs on an
   // explicit stack of parts (the right half pushed under the left one), so the leaves come in
   // the same order, left to right.
-  const out = [0];
+  const out = new Array<number>(); // not `[0]`: see ContourValue in path.ts
+  out.push(0);
   const tol2 = tolerance * tolerance;
   const st = FLATTEN_STACK;
   const depths = FLATTEN_DEPTHS;

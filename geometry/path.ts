@@ -34,6 +34,7 @@ import {
   vecHypot,
   vecLerp,
   vecNormalize,
+  pt,
   vecSub,
 } from './vec.ts';
 
@@ -55,12 +56,62 @@ export class PathDataError extends Error {
   override readonly name = 'PathDataError';
 }
 
+/** A cubic segment. */
+export type CubicSegment = Extract<Segment, { kind: 'cubic' }>;
+
+// Segments and contours, like points (see `pt` in vec.ts), are made by constructors rather than
+// literals: the same plain data, but V8 never moves a constructor's objects to "allocate old".
+class LineSegmentValue {
+  declare readonly kind: 'line';
+  declare readonly from: Point;
+  declare readonly to: Point;
+  constructor(from: Point, to: Point) {
+    this.kind = 'line';
+    this.from = from;
+    this.to = to;
+  }
+}
+
+class CubicSegmentValue {
+  declare readonly kind: 'cubic';
+  declare readonly from: Point;
+  declare readonly c1: Point;
+  declare readonly c2: Point;
+  declare readonly to: Point;
+  constructor(from: Point, c1: Point, c2: Point, to: Point) {
+    this.kind = 'cubic';
+    this.from = from;
+    this.c1 = c1;
+    this.c2 = c2;
+    this.to = to;
+  }
+}
+
+class ContourValue implements Contour {
+  declare readonly segments: readonly Segment[];
+  declare readonly closed: boolean;
+  constructor(segments: readonly Segment[], closed: boolean) {
+    this.segments = segments;
+    this.closed = closed;
+  }
+}
+
 export function lineSegment(from: Point, to: Point): Segment {
-  return { kind: 'line', from, to };
+  return new LineSegmentValue(from, to);
+}
+
+/** The cubic from `from` to `to` with control points c1, c2. */
+export function curveSegment(from: Point, c1: Point, c2: Point, to: Point): CubicSegment {
+  return new CubicSegmentValue(from, c1, c2, to);
 }
 
 export function cubicSegment(c: Cubic): Segment {
-  return { kind: 'cubic', from: c[0], c1: c[1], c2: c[2], to: c[3] };
+  return new CubicSegmentValue(c[0], c[1], c[2], c[3]);
+}
+
+/** A contour of these segments (see ContourValue). */
+export function contourOf(segments: readonly Segment[], closed: boolean): Contour {
+  return new ContourValue(segments, closed);
 }
 
 /** The segment as a cubic (a line gets controls at its thirds). */
@@ -76,7 +127,7 @@ export function segmentPoint(s: Segment, t: number): Point {
   const b = 3 * mt * mt * t;
   const d = 3 * mt * t * t;
   const e = t * t * t;
-  return { x: a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, y: a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y };
+  return pt(a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x, a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y);
 }
 
 /** Unit tangent at t (see cubicTangent for degenerate cases). */
@@ -127,19 +178,19 @@ export function segmentSplitAt(s: Segment, ts: readonly number[]): Segment[] {
 }
 
 export function segmentReverse(s: Segment): Segment {
-  return s.kind === 'line' ? lineSegment(s.to, s.from) : { kind: 'cubic', from: s.to, c1: s.c2, c2: s.c1, to: s.from };
+  return s.kind === 'line' ? lineSegment(s.to, s.from) : curveSegment(s.to, s.c2, s.c1, s.from);
 }
 
 /** Apply an affine map (exact for lines and cubics). */
 export function segmentTransform(s: Segment, m: Affine): Segment {
   return s.kind === 'line'
     ? lineSegment(affineApply(m, s.from), affineApply(m, s.to))
-    : { kind: 'cubic', from: affineApply(m, s.from), c1: affineApply(m, s.c1), c2: affineApply(m, s.c2), to: affineApply(m, s.to) };
+    : curveSegment(affineApply(m, s.from), affineApply(m, s.c1), affineApply(m, s.c2), affineApply(m, s.to));
 }
 
 /** Apply any point map to the defining points (exact only for affine maps). */
 export function segmentMapPoints(s: Segment, f: (p: Point) => Point): Segment {
-  return s.kind === 'line' ? lineSegment(f(s.from), f(s.to)) : { kind: 'cubic', from: f(s.from), c1: f(s.c1), c2: f(s.c2), to: f(s.to) };
+  return s.kind === 'line' ? lineSegment(f(s.from), f(s.to)) : curveSegment(f(s.from), f(s.c1), f(s.c2), f(s.to));
 }
 
 /** Parameters where the segment meets an infinite line, sorted. */
@@ -228,7 +279,7 @@ function arcToCubics(
     const pb = i === n - 1 ? to : at(b);
     const da = deriv(a);
     const db = deriv(b);
-    out.push([pa, { x: pa.x + k * da.x, y: pa.y + k * da.y }, { x: pb.x - k * db.x, y: pb.y - k * db.y }, pb]);
+    out.push([pa, pt(pa.x + k * da.x, pa.y + k * da.y), pt(pb.x - k * db.x, pb.y - k * db.y), pb]);
     prev = pb;
   }
   return out;
@@ -287,15 +338,16 @@ export function hypotAbove(dx: number, dy: number, limit: number): boolean {
  * of reading path data; see buildPath). Shared by buildPath and readBackOf.
  */
 class PathBuilder {
-  readonly contours: Contour[] = [];
-  private segments: Segment[] = [];
+  // lists by `new Array`, not `[]`: an array literal is pretenured like an object literal (see ContourValue)
+  readonly contours: Contour[] = new Array<Contour>();
+  private segments: Segment[] = new Array<Segment>();
   private start: Point | null = null;
   current: Point | null = null;
   private closed = false;
 
   move(x: number, y: number): void {
     this.finish();
-    this.start = this.current = { x, y };
+    this.start = this.current = pt(x, y);
   }
 
   /**
@@ -315,7 +367,7 @@ class PathBuilder {
 
   line(x: number, y: number): void {
     const from = this.current!;
-    const to = { x, y };
+    const to = pt(x, y);
     // vecDistance(from, to) > POINT_EPSILON
     if (hypotAbove(from.x - x, from.y - y, POINT_EPSILON)) this.segments.push(lineSegment(from, to));
     this.current = to;
@@ -323,11 +375,11 @@ class PathBuilder {
 
   curve(x1: number, y1: number, x2: number, y2: number, x: number, y: number): void {
     const from = this.current!;
-    const c1 = { x: x1, y: y1 };
-    const c2 = { x: x2, y: y2 };
-    const to = { x, y };
+    const c1 = pt(x1, y1);
+    const c2 = pt(x2, y2);
+    const to = pt(x, y);
     if (hypotAbove(from.x - x, from.y - y, POINT_EPSILON) || hypotAbove(from.x - x1, from.y - y1, POINT_EPSILON) || hypotAbove(from.x - x2, from.y - y2, POINT_EPSILON))
-      this.segments.push({ kind: 'cubic', from, c1, c2, to });
+      this.segments.push(curveSegment(from, c1, c2, to));
     this.current = to;
   }
 
@@ -354,12 +406,12 @@ class PathBuilder {
       else if (this.closed || gap <= CLOSE_GAP) {
         // snap the end exactly onto the start (only the end: a segment taken as it is by same()
         // may share one point object between its end and a control point)
-        segments[segments.length - 1] = last.kind === 'line' ? lineSegment(last.from, start) : { kind: 'cubic', from: last.from, c1: last.c1, c2: last.c2, to: start };
+        segments[segments.length - 1] = last.kind === 'line' ? lineSegment(last.from, start) : curveSegment(last.from, last.c1, last.c2, start);
         this.closed = true;
       }
-      this.contours.push({ segments, closed: this.closed });
+      this.contours.push(contourOf(segments, this.closed));
     }
-    this.segments = [];
+    this.segments = new Array<Segment>();
     this.closed = false;
   }
 }
@@ -385,13 +437,13 @@ function buildPath(commands: readonly RawCommand[]): Path {
         b.curve(v[0]!, v[1]!, v[2]!, v[3]!, v[4]!, v[5]!);
         break;
       case 'Q': {
-        const to = { x: v[2]!, y: v[3]! };
-        b.push(cubicSegment(quadraticToCubic([b.current!, { x: v[0]!, y: v[1]! }, to])));
+        const to = pt(v[2]!, v[3]!);
+        b.push(cubicSegment(quadraticToCubic([b.current!, pt(v[0]!, v[1]!), to])));
         b.current = to;
         break;
       }
       case 'A': {
-        const to = { x: v[5]!, y: v[6]! };
+        const to = pt(v[5]!, v[6]!);
         for (const cu of arcToCubics(b.current!, v[0]!, v[1]!, v[2]!, v[3] === 1, v[4] === 1, to)) b.push(cubicSegment(cu));
         b.current = to;
         break;
@@ -532,7 +584,7 @@ export function pathToSvgNow(path: Path, decimals = 4): string {
 export function pathToSvg(path: Path, decimals = 4): string {
   if (deferred && allFinite(path, decimals)) {
     const token = deferred.prefix + deferred.issued++;
-    deferred.texts.set(token, { path, decimals, read: undefined });
+    deferred.texts.set(token, new DeferredText(path, decimals));
     return token;
   }
   return writePath(path, decimals);
@@ -676,8 +728,8 @@ const TEXT = new TextWriter();
  */
 interface DeferredRun {
   readonly run: number;
-  /** `read` is made when first asked for: text printed by the last operation is never read back. */
-  readonly texts: Map<string, { readonly path: Path; readonly decimals: number; read: Path | undefined }>;
+  /** The placeholders handed out and still in use, with their paths. */
+  readonly texts: Map<string, DeferredText>;
   /** Placeholders handed out so far (the number in the next one; entries may have been dropped by `retain`). */
   issued: number;
   /** The placeholders' common start: DEFERRED_PREFIX, the run's number and a colon. */
@@ -689,6 +741,17 @@ interface DeferredRun {
   flattenings: Map<Segment, CubicFlattening[]>;
   /** The run's flattenings before the last `retain` (between operations): found again, an entry moves back. */
   flatteningsBefore: Map<Segment, CubicFlattening[]>;
+}
+/** A deferred text's path; `read` is made when first asked for: text printed by the last operation is never read back. */
+class DeferredText {
+  declare readonly path: Path;
+  declare readonly decimals: number;
+  declare read: Path | undefined;
+  constructor(path: Path, decimals: number) {
+    this.path = path;
+    this.decimals = decimals;
+    this.read = undefined;
+  }
 }
 let deferred: DeferredRun | undefined;
 let deferredRuns = 0;
@@ -847,15 +910,15 @@ function sameSegment(a: Segment, b: Segment): boolean {
 export function contourFromPoints(input: readonly Point[], closed: boolean): Contour {
   // consecutive duplicates (within POINT_EPSILON) would make zero-length segments
   const points = input.filter((p, i) => i === 0 || hypotAbove(p.x - input[i - 1]!.x, p.y - input[i - 1]!.y, POINT_EPSILON));
-  const segments: Segment[] = [];
+  const segments = new Array<Segment>();
   for (let i = 1; i < points.length; i++) segments.push(lineSegment(points[i - 1]!, points[i]!));
   if (closed && points.length > 2 && hypotAbove(points[points.length - 1]!.x - points[0]!.x, points[points.length - 1]!.y - points[0]!.y, POINT_EPSILON))
     segments.push(lineSegment(points[points.length - 1]!, points[0]!));
-  return { segments, closed: closed && points.length > 2 };
+  return contourOf(segments, closed && points.length > 2);
 }
 
 export function contourTransform(c: Contour, m: Affine): Contour {
-  return { closed: c.closed, segments: c.segments.map((s) => segmentTransform(s, m)) };
+  return contourOf(c.segments.map((s) => segmentTransform(s, m)), c.closed);
 }
 
 export function pathTransform(path: Path, m: Affine): Path {
@@ -863,7 +926,7 @@ export function pathTransform(path: Path, m: Affine): Path {
 }
 
 export function contourReverse(c: Contour): Contour {
-  return { closed: c.closed, segments: [...c.segments].reverse().map(segmentReverse) };
+  return contourOf([...c.segments].reverse().map(segmentReverse), c.closed);
 }
 
 export function contourLength(c: Contour, tolerance = LENGTH_TOLERANCE): number {
@@ -993,7 +1056,7 @@ export function contourFlatPoints(c: Contour, tolerance = FLATNESS): Point[] {
     const points = f.points;
     const n = f.ts.length;
     if (points) for (let k = 1; k < n; k++) out.push(points[k]!);
-    else for (let k = 1; k < n; k++) out.push(f.ts[k] === 1 ? s.to : { x: f.xs[k]!, y: f.ys[k]! });
+    else for (let k = 1; k < n; k++) out.push(f.ts[k] === 1 ? s.to : pt(f.xs[k]!, f.ys[k]!));
   }
   if (c.closed && out.length > 1) out.pop();
   return out;
@@ -1096,18 +1159,30 @@ export function contourFlatPerimeter(c: Contour, tolerance = FLATNESS): number {
  */
 const FLATTEN_CACHE = new WeakMap<Contour, Map<number, readonly FlatPoint[]>>();
 
+/** A FlatPoint made by a constructor (it is kept in FLATTEN_CACHE; see ContourValue). */
+class FlatPointValue implements FlatPoint {
+  declare readonly point: Point;
+  declare readonly segmentIndex: number;
+  declare readonly t: number;
+  constructor(point: Point, segmentIndex: number, t: number) {
+    this.point = point;
+    this.segmentIndex = segmentIndex;
+    this.t = t;
+  }
+}
+
 function flattenContour(c: Contour, tolerance: number): FlatPoint[] {
-  const out: FlatPoint[] = [];
+  const out = new Array<FlatPoint>();
   c.segments.forEach((s, i) => {
-    if (i === 0) out.push({ point: s.from, segmentIndex: 0, t: 0 });
+    if (i === 0) out.push(new FlatPointValue(s.from, 0, 0));
     if (s.kind === 'line') {
-      out.push({ point: s.to, segmentIndex: i, t: 1 });
+      out.push(new FlatPointValue(s.to, i, 1));
       return;
     }
     const f = cubicFlattening(s, tolerance);
     const ts = f.ts;
     const points = flatteningPoints(s, f);
-    for (let k = 1; k < ts.length; k++) out.push({ point: points[k]!, segmentIndex: i, t: ts[k]! });
+    for (let k = 1; k < ts.length; k++) out.push(new FlatPointValue(points[k]!, i, ts[k]!));
   });
   if (c.closed && out.length > 1) out.pop();
   return out;
@@ -1118,12 +1193,19 @@ function flattenContour(c: Contour, tolerance: number): FlatPoint[] {
  * the start). Point objects are made only when a caller asks for them (flatteningPoints); the
  * self-crossing check reads the coordinates.
  */
-interface CubicFlattening {
-  readonly tolerance: number;
-  readonly ts: readonly number[];
-  readonly xs: readonly number[];
-  readonly ys: readonly number[];
-  points: Point[] | undefined;
+class CubicFlattening {
+  declare readonly tolerance: number;
+  declare readonly ts: readonly number[];
+  declare readonly xs: readonly number[];
+  declare readonly ys: readonly number[];
+  declare points: Point[] | undefined;
+  constructor(tolerance: number, ts: readonly number[], xs: readonly number[], ys: readonly number[]) {
+    this.tolerance = tolerance;
+    this.ts = ts;
+    this.xs = xs;
+    this.ys = ys;
+    this.points = undefined;
+  }
 }
 
 /**
@@ -1168,7 +1250,7 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
     }
     if (!kept) {
       const older = CUBIC_FLATTEN_OLDER.get(s);
-      kept = older ?? [];
+      kept = older ?? new Array<CubicFlattening>();
       // a cubic new to a replay (applyOps) is most likely one of its intermediate results: its
       // flattenings stay with the run and die with it (see keepInputFlattenings)
       if (local && !older) local.set(s, kept);
@@ -1200,7 +1282,7 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
     xs[k] = a * from.x + b * c1.x + d * c2.x + e * to.x;
     ys[k] = a * from.y + b * c1.y + d * c2.y + e * to.y;
   }
-  const f: CubicFlattening = { tolerance, ts, xs, ys, points: undefined };
+  const f = new CubicFlattening(tolerance, ts, xs, ys);
   if (kept.length >= CUBIC_FLATTEN_KEEP) kept.shift();
   kept.push(f);
   return f;
@@ -1212,7 +1294,7 @@ function flatteningPoints(s: Extract<Segment, { kind: 'cubic' }>, f: CubicFlatte
   const n = f.ts.length;
   const points = new Array<Point>(n);
   points[0] = s.from;
-  for (let k = 1; k < n; k++) points[k] = f.ts[k] === 1 ? s.to : { x: f.xs[k]!, y: f.ys[k]! };
+  for (let k = 1; k < n; k++) points[k] = f.ts[k] === 1 ? s.to : pt(f.xs[k]!, f.ys[k]!);
   f.points = points;
   return points;
 }
@@ -1541,7 +1623,7 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
   // starts there, by the next check and by the next operation (read-only values, pure function)
   let memo = NEAREST_CACHE.get(c);
   if (!memo) {
-    memo = { count: 0, byX: new Map() };
+    memo = new NearestMemo();
     NEAREST_CACHE.set(c, memo);
   }
   // by x, then y: numbers as keys compare as the text `${x},${y}` did (0 and −0 alike, every
@@ -1549,7 +1631,7 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
   let byY = memo.byX.get(p.x);
   const hit = byY?.get(p.y);
   if (hit) return hit;
-  let best: ContourLocation & { distance: number } = { segmentIndex: 0, t: 0, point: c.segments[0]!.from, distance: Infinity };
+  let best: ContourLocation & { distance: number } = new NearestLocation(0, 0, c.segments[0]!.from, Infinity);
   const segs = c.segments;
   for (let i = 0; i < segs.length; i++) {
     // nothing can come closer than 0 (the comparison below is strict): the rest cannot replace it
@@ -1582,7 +1664,7 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     } else t = cubicNearestTime(segmentCubic(s), p);
     const q = segmentPoint(s, t);
     const dist = vecDistance(p, q);
-    if (dist < best.distance) best = { segmentIndex: i, t, point: q, distance: dist };
+    if (dist < best.distance) best = new NearestLocation(i, t, q, dist);
   }
   if (memo.count < 4096) {
     if (!byY) {
@@ -1596,7 +1678,26 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
 }
 
 /** contourNearest results by contour object, then by point (held weakly, bounded per contour). */
-const NEAREST_CACHE = new WeakMap<Contour, { count: number; byX: Map<number, Map<number, ContourLocation & { readonly distance: number }>> }>();
+const NEAREST_CACHE = new WeakMap<Contour, NearestMemo>();
+
+class NearestMemo {
+  count = 0;
+  readonly byX = new Map<number, Map<number, ContourLocation & { readonly distance: number }>>();
+}
+
+/** A contourNearest result, kept in NEAREST_CACHE: made by a constructor (see ContourValue). */
+class NearestLocation implements ContourLocation {
+  declare readonly segmentIndex: number;
+  declare readonly t: number;
+  declare readonly point: Point;
+  declare distance: number;
+  constructor(segmentIndex: number, t: number, point: Point, distance: number) {
+    this.segmentIndex = segmentIndex;
+    this.t = t;
+    this.point = point;
+    this.distance = distance;
+  }
+}
 
 /** All places where the contour meets an infinite line, in contour order. */
 export function contourLineIntersections(c: Contour, origin: Point, direction: Point): ContourLocation[] {
@@ -1651,7 +1752,7 @@ function compareLoc(a: { segmentIndex: number; t: number }, b: { segmentIndex: n
  */
 export function contourStretch(c: Contour, a: { segmentIndex: number; t: number }, b: { segmentIndex: number; t: number }): Contour {
   const segs = c.segments;
-  const out: Segment[] = [];
+  const out = new Array<Segment>();
   const push = (s: Segment): void => {
     // arc length ≥ chord: a chord ten times POINT_EPSILON settles it without the quadrature
     if (hypotAbove(s.from.x - s.to.x, s.from.y - s.to.y, 10 * POINT_EPSILON) || segmentLength(s, 1e-3) > POINT_EPSILON) out.push(s);
@@ -1670,21 +1771,21 @@ export function contourStretch(c: Contour, a: { segmentIndex: number; t: number 
       for (let i = a.segmentIndex + 1; i < b.segmentIndex; i++) push(segs[i]!);
       push(slice(segs[b.segmentIndex]!, 0, b.t));
     }
-    return { segments: out, closed: false };
+    return contourOf(out, false);
   }
-  if (!c.closed) return { segments: [], closed: false };
+  if (!c.closed) return contourOf([], false);
   push(slice(segs[a.segmentIndex]!, a.t, 1));
   for (let i = a.segmentIndex + 1; i < segs.length; i++) push(segs[i]!);
   for (let i = 0; i < b.segmentIndex; i++) push(segs[i]!);
   push(slice(segs[b.segmentIndex]!, 0, b.t));
-  return { segments: out, closed: false };
+  return contourOf(out, false);
 }
 
 /** Rotate a closed contour so that it starts at the given location (splitting a segment if needed). */
 export function contourStartAt(c: Contour, loc: { segmentIndex: number; t: number }): Contour {
   if (!c.closed) throw new RangeError('contourStartAt: the contour is open');
   const s = contourStretch(c, loc, loc);
-  return { segments: s.segments, closed: true };
+  return contourOf(s.segments, true);
 }
 
 /** Tangent direction at the start and end of a segment, for corner tests. */

@@ -10,21 +10,39 @@ export interface Point {
   readonly y: number;
 }
 
-/** Shorthand constructor. */
+/**
+ * The engine makes its points with `pt`, not with `{ x, y }` literals. The object is the same
+ * plain data (own `x` and `y`, nothing else); only how V8 allocates it differs: objects from a
+ * literal that were alive at a young collection get their literal moved to "allocate in the
+ * old generation" for good (allocation-site pretenuring), while objects made by a constructor
+ * stay young. A replay's intermediate paths outlive a young collection or two and then die;
+ * allocated old, they filled the old generation and kept young objects alive through it (see
+ * geometry/README, engine-speed-7).
+ */
+class PointValue implements Point {
+  declare readonly x: number;
+  declare readonly y: number;
+  constructor(x: number, y: number) {
+    this.x = x;
+    this.y = y;
+  }
+}
+
+/** A point (see PointValue for why not a literal). */
 export function pt(x: number, y: number): Point {
-  return { x, y };
+  return new PointValue(x, y);
 }
 
 export function vecAdd(a: Point, b: Point): Point {
-  return { x: a.x + b.x, y: a.y + b.y };
+  return pt(a.x + b.x, a.y + b.y);
 }
 
 export function vecSub(a: Point, b: Point): Point {
-  return { x: a.x - b.x, y: a.y - b.y };
+  return pt(a.x - b.x, a.y - b.y);
 }
 
 export function vecScale(a: Point, k: number): Point {
-  return { x: a.x * k, y: a.y * k };
+  return pt(a.x * k, a.y * k);
 }
 
 export function vecDot(a: Point, b: Point): number {
@@ -70,19 +88,19 @@ export function vecDistance(a: Point, b: Point): number {
 /** Unit vector. Degenerate: a zero vector (length < POINT_EPSILON) returns {0, 0}. */
 export function vecNormalize(a: Point): Point {
   const l = vecLength(a);
-  return l < POINT_EPSILON ? { x: 0, y: 0 } : { x: a.x / l, y: a.y / l };
+  return l < POINT_EPSILON ? pt(0, 0) : pt(a.x / l, a.y / l);
 }
 
 /** a + (b − a)·k; k outside [0, 1] extrapolates. */
 export function vecLerp(a: Point, b: Point, k: number): Point {
-  return { x: a.x + (b.x - a.x) * k, y: a.y + (b.y - a.y) * k };
+  return pt(a.x + (b.x - a.x) * k, a.y + (b.y - a.y) * k);
 }
 
 /** Rotate by angle (radians) about the origin; positive angles turn clockwise on screen (y down). */
 export function vecRotate(a: Point, angle: number): Point {
   const c = Math.cos(angle);
   const s = Math.sin(angle);
-  return { x: a.x * c - a.y * s, y: a.x * s + a.y * c };
+  return pt(a.x * c - a.y * s, a.x * s + a.y * c);
 }
 
 /** Rotate about a centre. */
@@ -92,7 +110,7 @@ export function vecRotateAbout(a: Point, centre: Point, angle: number): Point {
 
 /** The vector turned +90° (clockwise on screen with y down): (x, y) → (−y, x). */
 export function vecPerp(a: Point): Point {
-  return { x: -a.y, y: a.x };
+  return pt(-a.y, a.x);
 }
 
 /** Same point within a tolerance (default POINT_EPSILON). */
@@ -121,12 +139,12 @@ export interface Affine {
 export const AFFINE_IDENTITY: Affine = { a: 1, b: 0, c: 0, d: 1, e: 0, f: 0 };
 
 export function affineApply(m: Affine, p: Point): Point {
-  return { x: m.a * p.x + m.c * p.y + m.e, y: m.b * p.x + m.d * p.y + m.f };
+  return pt(m.a * p.x + m.c * p.y + m.e, m.b * p.x + m.d * p.y + m.f);
 }
 
 /** Apply only the linear part (for vectors). */
 export function affineApplyVector(m: Affine, v: Point): Point {
-  return { x: m.a * v.x + m.c * v.y, y: m.b * v.x + m.d * v.y };
+  return pt(m.a * v.x + m.c * v.y, m.b * v.x + m.d * v.y);
 }
 
 /** The map "first n, then m". */
@@ -168,7 +186,7 @@ export function affineScale(sx: number, sy = sx): Affine {
 }
 
 /** Rotation by angle (radians, clockwise on screen) about a centre (default origin). */
-export function affineRotate(angle: number, centre: Point = { x: 0, y: 0 }): Affine {
+export function affineRotate(angle: number, centre: Point = pt(0, 0)): Affine {
   const c = Math.cos(angle);
   const s = Math.sin(angle);
   return {
@@ -187,7 +205,7 @@ export function affineRotate(angle: number, centre: Point = { x: 0, y: 0 }): Aff
  */
 export function affineScaleInFrame(axis: Point, along: number, across: number, origin: Point): Affine {
   let u = vecNormalize(axis);
-  if (u.x === 0 && u.y === 0) u = { x: 0, y: 1 };
+  if (u.x === 0 && u.y === 0) u = pt(0, 1);
   const v = vecPerp(u);
   // M = along·u uᵀ + across·v vᵀ
   const a = along * u.x * u.x + across * v.x * v.x;

@@ -14,11 +14,13 @@ import {
   segmentTransform,
   segmentPoint,
   lineSegment,
+  contourOf,
+  curveSegment,
   type Segment,
 } from '../path.ts';
 import { PARAM_EPSILON, REDRAW_CHECKS, REDRAW_TOLERANCE, SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
 import { type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, outlineContour, orderedOutlines } from '../model.ts';
-import { type Affine, type Point, AFFINE_IDENTITY, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecHypot, vecNormalize, vecSub } from '../vec.ts';
+import { type Affine, type Point, AFFINE_IDENTITY, pt, affineApply, affineInvert, affineMultiply, vecCross, vecDistance, vecDot, vecHypot, vecNormalize, vecSub } from '../vec.ts';
 
 /** Something the person should know about a result (an estimate, a large change, …). */
 export interface Caution {
@@ -185,7 +187,7 @@ export function bandMapPath(m: BandMap, path: Path): Path {
   }
   if (untouched) return path;
   return path.map((c, ci) => {
-    const segments: Segment[] = [];
+    const segments = new Array<Segment>();
     const cc = cuts[ci]!;
     const cw = whole[ci]!;
     for (let si = 0; si < c.segments.length; si++) {
@@ -196,7 +198,7 @@ export function bandMapPath(m: BandMap, path: Path): Path {
         for (let k = 0; k < parts.length; k++) segments.push(parts[k]!);
       } else segments.push(map === AFFINE_IDENTITY ? s : segmentTransform(s, map));
     }
-    return { closed: c.closed, segments };
+    return contourOf(segments, c.closed);
   });
 }
 
@@ -218,7 +220,7 @@ export function mapOutline(outline: Outline, pathMap: (p: Path) => Path, pointMa
 }
 
 function roundPoint(p: Point): Point {
-  return { x: round6(p.x), y: round6(p.y) };
+  return pt(round6(p.x), round6(p.y));
 }
 
 /**
@@ -284,27 +286,27 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
       const a = -(2 * h1 + h2) / (h1 * (h1 + h2));
       const b = (h1 + h2) / (h1 * h2);
       const c = -h1 / (h2 * (h1 + h2));
-      return { x: a * q[0]!.x + b * q[1]!.x + c * q[2]!.x, y: a * q[0]!.y + b * q[1]!.y + c * q[2]!.y };
+      return pt(a * q[0]!.x + b * q[1]!.x + c * q[2]!.x, a * q[0]!.y + b * q[1]!.y + c * q[2]!.y);
     }
     if (k === n) {
       const [h1, h2] = [h[n - 1]!, h[n - 2]!];
       const a = -(2 * h1 + h2) / (h1 * (h1 + h2));
       const b = (h1 + h2) / (h1 * h2);
       const c = -h1 / (h2 * (h1 + h2));
-      return { x: -(a * q[n]!.x + b * q[n - 1]!.x + c * q[n - 2]!.x), y: -(a * q[n]!.y + b * q[n - 1]!.y + c * q[n - 2]!.y) };
+      return pt(-(a * q[n]!.x + b * q[n - 1]!.x + c * q[n - 2]!.x), -(a * q[n]!.y + b * q[n - 1]!.y + c * q[n - 2]!.y));
     }
     // derivative of the parabola through k−1, k, k+1 at k (chord-length parameter)
     const [h0, h1] = [h[k - 1]!, h[k]!];
     const a = -h1 / (h0 * (h0 + h1));
     const b = (h1 - h0) / (h0 * h1);
     const c = h0 / (h1 * (h0 + h1));
-    return { x: a * q[k - 1]!.x + b * q[k]!.x + c * q[k + 1]!.x, y: a * q[k - 1]!.y + b * q[k]!.y + c * q[k + 1]!.y };
+    return pt(a * q[k - 1]!.x + b * q[k]!.x + c * q[k + 1]!.x, a * q[k - 1]!.y + b * q[k]!.y + c * q[k + 1]!.y);
   };
   const t = Array.from({ length: n + 1 }, (_, k) => tangent(k));
   const hermite = (k: number, m: number, len: number): Segment => {
     const a = q[k]!;
     const b = q[m]!;
-    return { kind: 'cubic', from: a, c1: { x: a.x + (t[k]!.x * len) / 3, y: a.y + (t[k]!.y * len) / 3 }, c2: { x: b.x - (t[m]!.x * len) / 3, y: b.y - (t[m]!.y * len) / 3 }, to: b };
+    return curveSegment(a, pt(a.x + (t[k]!.x * len) / 3, a.y + (t[k]!.y * len) / 3), pt(b.x - (t[m]!.x * len) / 3, b.y - (t[m]!.y * len) / 3), b);
   };
   // Greedy merge: one cubic spans as many points as it passes within `mergeTolerance` of
   // (checked at their chord-length parameters), so nearly straight or evenly curved runs
@@ -332,7 +334,7 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
     }
     return seg;
   };
-  const out: Segment[] = [];
+  const out = new Array<Segment>();
   let k = 0;
   while (k < n) {
     let best = k + 1;
@@ -392,7 +394,7 @@ export type SmoothPlaneMap = (x: number, y: number, out: Float64Array) => void;
  * error of a Hermite cubic falls as the fourth power of its span, so a few cubics do.
  */
 export function redrawMapped(s: Segment, t0: number, t1: number, map: SmoothPlaneMap, tolerance = REDRAW_TOLERANCE): Segment[] {
-  const out: Segment[] = [];
+  const out = new Array<Segment>();
   const a = mappedAt(s, t0, map);
   const b = mappedAt(s, t1, map);
   fitSpan(s, t0, t1, a, b, map, tolerance * tolerance, 0, out);
@@ -437,7 +439,7 @@ function mappedAt(s: Segment, t: number, map: SmoothPlaneMap): MappedEnd {
     vy = da * (s.c1.y - s.from.y) + db * (s.c2.y - s.c1.y) + dd * (s.to.y - s.c2.y);
   }
   map(x, y, MAP_OUT);
-  return { point: { x: MAP_OUT[0]!, y: MAP_OUT[1]! }, dx: MAP_OUT[2]! * vx + MAP_OUT[3]! * vy, dy: MAP_OUT[4]! * vx + MAP_OUT[5]! * vy };
+  return { point: pt(MAP_OUT[0]!, MAP_OUT[1]!), dx: MAP_OUT[2]! * vx + MAP_OUT[3]! * vy, dy: MAP_OUT[4]! * vx + MAP_OUT[5]! * vy };
 }
 
 function fitSpan(s: Segment, ta: number, tb: number, a: MappedEnd, b: MappedEnd, map: SmoothPlaneMap, tol2: number, depth: number, out: Segment[]): void {
@@ -480,7 +482,7 @@ function fitSpan(s: Segment, ta: number, tb: number, a: MappedEnd, b: MappedEnd,
       fits = dx * dx + dy * dy <= tol2;
     }
   if (fits) {
-    out.push({ kind: 'cubic', from: p0, c1: { x: c1x, y: c1y }, c2: { x: c2x, y: c2y }, to: p3 });
+    out.push(curveSegment(p0, pt(c1x, c1y), pt(c2x, c2y), p3));
     return;
   }
   const tm = ta + h / 2;

@@ -27,8 +27,8 @@ import { z } from 'zod';
 import { REDRAW_CHECKS } from '../tolerance.ts';
 import type { Outline, Pattern, Piece } from '../model.ts';
 import { landmarkOf, outlineContour } from '../model.ts';
-import { type Path, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentMapPoints, segmentSlice, type Segment } from '../path.ts';
-import { type Point, vecAdd, vecDot, vecPerp, vecScale } from '../vec.ts';
+import { type Path, contourOf, contourLineIntersections, contourNearest, contourStretch, pathFromSvg, segmentMapPoints, segmentSlice, type Segment } from '../path.ts';
+import { type Point, pt, vecAdd, vecDot, vecPerp, vecScale } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 export const girthOpSchema = z.object({
@@ -150,7 +150,7 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
   /** The displacement k0·w·(alpha − centre)/half along `across` with one taper value w (no clamping): affine. */
   const affineWith = (w: number) => (p: Point): Point => {
     const k = (k0 * w * (p.x * ax + p.y * ay - centre)) / half;
-    return { x: p.x + ax * k, y: p.y + ay * k };
+    return pt(p.x + ax * k, p.y + ay * k);
   };
   return {
     cuts,
@@ -186,9 +186,9 @@ function girthField(piece: Piece, outline: Outline, op: z.output<typeof girthOpS
     },
     displaceXY: (x, y) => {
       const w = weightXY(x, y) * profile(x * gx + y * gy);
-      if (w === 0) return { x, y };
+      if (w === 0) return pt(x, y);
       const k = sign * op.amount * w;
-      return { x: x + ax * k, y: y + ay * k };
+      return pt(x + ax * k, y + ay * k);
     },
     active: (p) => weight(p) > 0 && profile(beta(p)) > 0,
     activeXY: (x, y) => weightXY(x, y) > 0 && profile(x * gx + y * gy) > 0,
@@ -258,14 +258,14 @@ function deformSegmentInto(s: Segment, field: Field, out: Segment[]): boolean {
   return true;
 }
 
-const asPoint = (x: number, y: number): Point => ({ x, y });
+const asPoint = pt;
 
 function deformPath(path: Path, field: Field): Path {
   let changed = false;
   const out = path.map((c) => {
-    const segments: Segment[] = [];
+    const segments = new Array<Segment>();
     for (let i = 0; i < c.segments.length; i++) if (deformSegmentInto(c.segments[i]!, field, segments)) changed = true;
-    return { closed: c.closed, segments };
+    return contourOf(segments, c.closed);
   });
   return changed ? out : path;
 }

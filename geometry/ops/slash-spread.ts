@@ -21,7 +21,7 @@
 import { z } from 'zod';
 import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
-import { type Path, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
+import { type Path, contourOf, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
 import { REDRAW_CHECKS, TRUE_ZONE } from '../tolerance.ts';
 import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecDot, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
@@ -194,9 +194,9 @@ export function performSlashSpreadParsed(pattern: Pattern, op: z.output<typeof s
   const mapPath = (p: Path): Path => {
     let changed = false;
     const out = p.map((c) => {
-      const segments: Segment[] = [];
+      const segments = new Array<Segment>();
       for (let i = 0; i < c.segments.length; i++) if (mapSegmentInto(c.segments[i]!, m, rigid, segments)) changed = true;
-      return { closed: c.closed, segments };
+      return contourOf(segments, c.closed);
     });
     return changed ? out : p;
   };

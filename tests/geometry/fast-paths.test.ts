@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourFlatCount, contourFlatInto, contourFlatPerimeter, contourIsSimple, contourSignedArea, pathToSvgNow, simplePolygonText, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
+import { type Contour, type Cubic, type Path, type Point, type Segment, applyOps, contourOf, curveSegment, lineSegment, pt, contourFlatCount, contourFlatInto, contourFlatPerimeter, contourIsSimple, contourSignedArea, pathToSvgNow, simplePolygonText, contourFlatPoints, contourFlatten, contourFlattenShared, contourFromPoints, contourNearest, contourSelfCrossings, contourStretch, cubicFlattenTimes, cubicLineIntersections, cubicNearestTime, cubicPoint, cubicSplit, demoPattern, hypotAbove, vecHypot, parsePattern, pathFromSvg, pathToSvg, performOp, POINT_EPSILON, round6, segmentLength, segmentSlice, smoothThrough, solveCubic } from '../../geometry/index.ts';
 import { orderByKey } from '../../geometry/sweep.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -637,5 +637,37 @@ describe('contourStretch (a cubic taken whole is kept)', () => {
       ),
       { numRuns: 500 },
     );
+  });
+});
+
+describe('points, segments and contours made by constructors (engine-speed-7)', () => {
+  // They are made by constructors instead of literals only for the garbage collector's sake;
+  // to everything that reads them they must be the same plain data as the literals.
+  it('have exactly the own enumerable fields of the literal, in the same order, and print the same JSON', () => {
+    fc.assert(
+      fc.property(fc.double({ noNaN: true }), fc.double({ noNaN: true }), (x, y) => {
+        const p = pt(x, y);
+        expect(Object.keys(p)).toEqual(['x', 'y']);
+        expect(JSON.stringify(p)).toBe(JSON.stringify({ x, y }));
+        expect({ ...p }).toStrictEqual({ x, y });
+      }),
+    );
+    const [a, b, c, d] = [pt(0, 0), pt(1, 2), pt(3, 4), pt(5, 6)];
+    expect(Object.keys(lineSegment(a, b))).toEqual(['kind', 'from', 'to']);
+    expect(Object.keys(curveSegment(a, b, c, d))).toEqual(['kind', 'from', 'c1', 'c2', 'to']);
+    expect(JSON.stringify(curveSegment(a, b, c, d))).toBe(JSON.stringify({ kind: 'cubic', from: a, c1: b, c2: c, to: d }));
+    expect(Object.keys(contourOf([lineSegment(a, b)], false))).toEqual(['segments', 'closed']);
+  });
+
+  it('are what reading path data gives', () => {
+    const [contour] = pathFromSvg('M 0 0 L 10 0 C 12 1 13 4 10 10 Z');
+    expect(JSON.parse(JSON.stringify(contour))).toEqual({
+      segments: [
+        { kind: 'line', from: { x: 0, y: 0 }, to: { x: 10, y: 0 } },
+        { kind: 'cubic', from: { x: 10, y: 0 }, c1: { x: 12, y: 1 }, c2: { x: 13, y: 4 }, to: { x: 10, y: 10 } },
+        { kind: 'line', from: { x: 10, y: 10 }, to: { x: 0, y: 0 } },
+      ],
+      closed: true,
+    });
   });
 });
