@@ -23,7 +23,7 @@ import type { Pattern, Piece } from '../model.ts';
 import { outlineContour } from '../model.ts';
 import { type Path, contourOf, segmentSlice, segmentTransform, type Segment, contourFlatPoints } from '../path.ts';
 import { REDRAW_CHECKS, TRUE_ZONE } from '../tolerance.ts';
-import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecDot, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
+import { type Point, affineRotate, vecAngleBetween, vecDistance, vecCross, vecDot, vecHypot, vecRotate, vecRotateAbout, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, type SmoothPlaneMap, assertSimple, fmtMm, mapLine, mapOutline, pieceGrain, redrawMapped, segmentCutTimes, segmentPointThen } from './common.ts';
 
 const point = z.object({ x: z.number(), y: z.number() });
@@ -71,6 +71,12 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   const hiNew = w / 2 + Math.max(0, theta);
   // ψ: signed angle from the slash ray, positive toward the moving side
   const psi = (p: Point): number => side * vecAngleBetween(ray, vecSub(p, hinge));
+  // ψ of the point (x, y): vecAngleBetween's arithmetic on numbers, without the point objects
+  const psiXY = (x: number, y: number): number => {
+    const vx = x - hinge.x;
+    const vy = y - hinge.y;
+    return side * Math.atan2(ray.x * vy - ray.y * vx, ray.x * vx + ray.y * vy);
+  };
   const f = (s: number): number => {
     if (s <= lo) return s;
     if (s < hiOld) return lo + ((s - lo) * (hiNew - lo)) / (hiOld - lo);
@@ -89,16 +95,17 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   // so its gradient is (r − 1)·∇angle = (r − 1)·perp(v)/|v|², v = p − H
   const r = (hiNew - lo) / (hiOld - lo);
   const smooth: SmoothPlaneMap = (x, y, out) => {
-    const p = { x, y };
-    // turn(p) and region(p) below, with the distance to the hinge and the angle ψ found once
-    const near = vecDistance(p, hinge) < 1e-9;
-    const s = near ? 0 : psi(p);
+    // turn(p) and region(p) below, with the distance to the hinge and the angle ψ found once;
+    // the rotation about the hinge is vecRotateAbout's arithmetic on numbers
+    const dx = x - hinge.x;
+    const dy = y - hinge.y;
+    const near = vecHypot(dx, dy) < 1e-9;
+    const s = near ? 0 : psiXY(x, y);
     const a = near ? 0 : side * (f(s) - s);
     const c = Math.cos(a);
     const sn = Math.sin(a);
-    const q = vecRotateAbout(p, hinge, a);
-    out[0] = q.x;
-    out[1] = q.y;
+    out[0] = hinge.x + (dx * c - dy * sn);
+    out[1] = hinge.y + (dx * sn + dy * c);
     out[2] = c;
     out[3] = -sn;
     out[4] = sn;
@@ -121,7 +128,10 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
     turn,
     map: (p) => vecRotateAbout(p, hinge, turn(p)),
     region,
-    regionXY: (x, y) => region({ x, y }),
+    regionXY: (x, y) => {
+      const s = psiXY(x, y);
+      return s <= lo ? 0 : s < hiOld ? 2 : 1;
+    },
     cuts: [
       { origin: hinge, direction: vecRotate(ray, side * lo) },
       { origin: hinge, direction: vecRotate(ray, side * hiOld) },
