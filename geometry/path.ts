@@ -1656,15 +1656,30 @@ export function contourNearest(c: Contour, p: Point): ContourLocation & { readon
     // the search over every segment picks.
     const slack = 1e-12 * Math.max(Math.abs(minX), Math.abs(maxX), Math.abs(minY), Math.abs(maxY));
     if (hypotAbove(dx, dy, best.distance + slack)) continue;
+    // the point at t by segmentPoint's arithmetic, made only for a new best (vecSub, vecDot,
+    // vecLerp and vecDistance written out on numbers, in the same order)
     let t: number;
+    let qx: number;
+    let qy: number;
     if (s.kind === 'line') {
-      const d = vecSub(s.to, s.from);
-      const l2 = vecDot(d, d);
-      t = l2 === 0 ? 0 : Math.max(0, Math.min(1, vecDot(vecSub(p, s.from), d) / l2));
-    } else t = cubicNearestTime(segmentCubic(s), p);
-    const q = segmentPoint(s, t);
-    const dist = vecDistance(p, q);
-    if (dist < best.distance) best = new NearestLocation(i, t, q, dist);
+      const dx0 = s.to.x - s.from.x;
+      const dy0 = s.to.y - s.from.y;
+      const l2 = dx0 * dx0 + dy0 * dy0;
+      t = l2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s.from.x) * dx0 + (p.y - s.from.y) * dy0) / l2));
+      qx = s.from.x + (s.to.x - s.from.x) * t;
+      qy = s.from.y + (s.to.y - s.from.y) * t;
+    } else {
+      t = cubicNearestTime(segmentCubic(s), p);
+      const mt = 1 - t;
+      const a = mt * mt * mt;
+      const b = 3 * mt * mt * t;
+      const d = 3 * mt * t * t;
+      const e = t * t * t;
+      qx = a * s.from.x + b * s.c1.x + d * s.c2.x + e * s.to.x;
+      qy = a * s.from.y + b * s.c1.y + d * s.c2.y + e * s.to.y;
+    }
+    const dist = vecHypot(p.x - qx, p.y - qy);
+    if (dist < best.distance) best = new NearestLocation(i, t, pt(qx, qy), dist);
   }
   if (memo.count < 4096) {
     if (!byY) {

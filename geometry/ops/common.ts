@@ -159,21 +159,24 @@ export function bandMapPath(m: BandMap, path: Path): Path {
   const origins = m.breaks.map((b) => m.lineAt(b));
   const cuts: ((readonly number[])[] | undefined)[][] = [];
   const whole: (Affine | undefined)[][] = [];
+  // a segment's crossings with each cut line, kept (copied) only for a segment they split
+  const found = new Array<readonly number[]>(origins.length);
   let untouched = true;
   for (let ci = 0; ci < path.length; ci++) {
     const c = path[ci]!;
     const cc: ((readonly number[])[] | undefined)[] = [];
     const cw: (Affine | undefined)[] = [];
-    for (const s of c.segments) {
-      const ts = cutsOf(m, s, origins);
+    for (let si = 0; si < c.segments.length; si++) {
+      const s = c.segments[si]!;
       let split = false;
-      for (let i = 0; i < ts.length; i++) {
-        const list = ts[i]!;
+      for (let i = 0; i < origins.length; i++) {
+        const list = segmentLineIntersections(s, origins[i]!, m.direction);
+        found[i] = list;
         for (let k = 0; k < list.length; k++) if (list[k]! > PARAM_EPSILON && list[k]! < 1 - PARAM_EPSILON) split = true;
       }
       if (split) {
         untouched = false;
-        cc.push(ts);
+        cc.push(found.slice());
         cw.push(undefined);
       } else {
         const map = m.maps[bandIndex(m, m.coordinate(segmentPoint(s, 0.5)))]!;
