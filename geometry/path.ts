@@ -1521,17 +1521,15 @@ function verticesMayCross(xs: Float64Array, ys: Float64Array, n: number, closed:
   for (let r = 0; r < edgeCount; r++) {
     const e = order[r]!;
     const left = overY ? lo[e]! : lo[e]! - sweepSlack;
-    let kept = 0;
-    for (let j = 0; j < count; j++) {
-      const o = active[j]!;
-      if (!(hi[o]! < left)) active[kept++] = o;
-    }
-    count = kept;
     const e1 = e + 1 === n ? 0 : e + 1;
     const eLo = overY ? lo2[e]! - testSlack : lo2[e]!;
     const eHi = hi2[e]!;
+    // one pass: drop the active edges the sweep has left behind, test the others
+    let kept = 0;
     for (let j = 0; j < count; j++) {
       const o = active[j]!;
+      if (hi[o]! < left) continue;
+      active[kept++] = o;
       const gap = Math.abs(o - e);
       if (gap <= 1 || (closed && gap === edgeCount - 1)) continue;
       if (hi2[o]! < eLo || eHi < (overY ? lo2[o]! - testSlack : lo2[o]!)) continue;
@@ -1542,6 +1540,7 @@ function verticesMayCross(xs: Float64Array, ys: Float64Array, n: number, closed:
       )
         return true;
     }
+    count = kept;
     active[count++] = e;
   }
   return false;

@@ -162,4 +162,6 @@ export const F64_SLOT = {
   polygonYs: 25,
   runXs: 26,
   runYs: 27,
+  halvesVLo: 28,
+  halvesVHi: 29,
 } as const;

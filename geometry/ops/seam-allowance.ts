@@ -571,9 +571,13 @@ function innerHalvesInside(
   const vb = overY ? bx : by;
   const lo = scratchF64(F64_SLOT.halvesLo, count);
   const hi = scratchF64(F64_SLOT.halvesHi, count);
+  const vLo = scratchF64(F64_SLOT.halvesVLo, count);
+  const vHi = scratchF64(F64_SLOT.halvesVHi, count);
   for (let s = 0; s < count; s++) {
     lo[s] = Math.min(ua[s]!, ub[s]!);
     hi[s] = Math.max(ua[s]!, ub[s]!);
+    vLo[s] = Math.min(va[s]!, vb[s]!);
+    vHi[s] = Math.max(va[s]!, vb[s]!);
   }
   // any order by lo tests the same pairs (see mayCross in path.ts)
   const order = orderByKey(lo, count);
@@ -588,17 +592,16 @@ function innerHalvesInside(
     const left = lo[e]!;
     const probe = e >= probesFrom;
     const others = probe ? activeEdges : activeProbes;
-    let live = probe ? liveEdges : liveProbes;
+    const live = probe ? liveEdges : liveProbes;
+    const eMin = vLo[e]!;
+    const eMax = vHi[e]!;
+    // one pass: drop the other kind's segments the sweep has left behind, test the others
     let kept = 0;
-    for (let k = 0; k < live; k++) if (!(hi[others[k]!]! < left)) others[kept++] = others[k]!;
-    live = kept;
-    if (probe) liveEdges = live;
-    else liveProbes = live;
-    const eMin = Math.min(va[e]!, vb[e]!);
-    const eMax = Math.max(va[e]!, vb[e]!);
     for (let k = 0; k < live; k++) {
       const o = others[k]!;
-      if (Math.max(va[o]!, vb[o]!) < eMin || eMax < Math.min(va[o]!, vb[o]!)) continue;
+      if (hi[o]! < left) continue;
+      others[kept++] = o;
+      if (vHi[o]! < eMin || eMax < vLo[o]!) continue;
       const d1 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, ax[e]!, ay[e]!);
       const d2 = orient(ax[o]!, ay[o]!, bx[o]!, by[o]!, bx[e]!, by[e]!);
       if (d1 * d2 > 0) continue;
@@ -606,6 +609,8 @@ function innerHalvesInside(
       const d4 = orient(ax[e]!, ay[e]!, bx[e]!, by[e]!, bx[o]!, by[o]!);
       if (d3 * d4 <= 0) return false;
     }
+    if (probe) liveEdges = kept;
+    else liveProbes = kept;
     if (probe) activeProbes[liveProbes++] = e;
     else activeEdges[liveEdges++] = e;
   }
