@@ -732,6 +732,8 @@ interface DeferredRun {
   readonly texts: Map<string, DeferredText>;
   /** Placeholders handed out so far (the number in the next one; entries may have been dropped by `retain`). */
   issued: number;
+  /** Calls of `retain` so far: the entries found in use by the last one carry its number as their `mark`. */
+  retained: number;
   /** The placeholders' common start: DEFERRED_PREFIX, the run's number and a colon. */
   readonly prefix: string;
   /**
@@ -747,10 +749,13 @@ class DeferredText {
   declare readonly path: Path;
   declare readonly decimals: number;
   declare read: Path | undefined;
+  /** See DeferredRun.retained. */
+  declare mark: number;
   constructor(path: Path, decimals: number) {
     this.path = path;
     this.decimals = decimals;
     this.read = undefined;
+    this.mark = 0;
   }
 }
 let deferred: DeferredRun | undefined;
@@ -770,7 +775,7 @@ const DEFERRED_PREFIX = '\u0000path:';
 export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d: string) => string, retain: (inUse: readonly string[]) => void) => T): T {
   if (deferred || texts.some((d) => d.startsWith(DEFERRED_PREFIX))) return body((d) => d, () => {});
   const number = ++deferredRuns;
-  const run: DeferredRun = { run: number, prefix: `${DEFERRED_PREFIX}${number}:`, texts: new Map(), issued: 0, flattenings: new Map(), flatteningsBefore: new Map() };
+  const run: DeferredRun = { run: number, prefix: `${DEFERRED_PREFIX}${number}:`, texts: new Map(), issued: 0, retained: 0, flattenings: new Map(), flatteningsBefore: new Map() };
   deferred = run;
   try {
     return body(
@@ -782,8 +787,13 @@ export function pathTextDeferred<T>(texts: readonly string[], body: (resolve: (d
         run.flatteningsBefore = run.flattenings;
         run.flattenings = new Map();
         if (run.texts.size === 0) return;
-        const used = new Set(inUse);
-        for (const token of run.texts.keys()) if (!used.has(token)) run.texts.delete(token);
+        // mark the entries in use, then drop the others (no set of the texts in use is built)
+        const mark = ++run.retained;
+        for (let i = 0; i < inUse.length; i++) {
+          const entry = run.texts.get(inUse[i]!);
+          if (entry) entry.mark = mark;
+        }
+        for (const [token, entry] of run.texts) if (entry.mark !== mark) run.texts.delete(token);
       },
     );
   } finally {
