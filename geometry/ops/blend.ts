@@ -26,6 +26,7 @@ import {
   contourFlatten,
   contourFlattenShared,
   contourLength,
+  contourOf,
   contourNearest,
   contourOffsetOf,
   contourStretch,
@@ -36,7 +37,7 @@ import {
   segmentPoint,
 } from '../path.ts';
 import { BLEND_SAMPLE_SPACING, POINT_EPSILON } from '../tolerance.ts';
-import { type Point, vecDistance, vecDot, vecHypot, vecSub } from '../vec.ts';
+import { type Point, pt, vecDistance, vecDot, vecHypot, vecSub } from '../vec.ts';
 import { AlterationError, type Caution, type OpResult, assertSimple, pieceGrain, smoothThrough } from './common.ts';
 
 export const blendOpSchema = z.object({
@@ -77,7 +78,7 @@ function lerpAt<T>(items: readonly T[], scale: SizeScale, sigma: number, f: (a: 
   return f(items[i]!, items[i + 1]!, w);
 }
 
-const lerpPoint = (a: Point, b: Point, w: number): Point => ({ x: a.x + (b.x - a.x) * w, y: a.y + (b.y - a.y) * w });
+const lerpPoint = (a: Point, b: Point, w: number): Point => pt(a.x + (b.x - a.x) * w, a.y + (b.y - a.y) * w);
 const lerpNum = (a: number, b: number, w: number): number => a + (b - a) * w;
 const smoothstep = (u: number): number => u * u * (3 - 2 * u);
 
@@ -304,7 +305,7 @@ function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: 
         perSize: stretches.map((c, s) => {
           const from = k === 0 ? 0 : corners[s]![k - 1]!;
           const to = k === cuts ? c.segments.length : corners[s]![k]!;
-          return { segments: c.segments.slice(from, to), closed: false };
+          return contourOf(c.segments.slice(from, to), false);
         }),
       });
   }
@@ -333,14 +334,14 @@ function blendPiece(piece: Piece, op: z.output<typeof blendOpSchema>, cautions: 
     }
     blendedParts.push(pts);
   }
-  const segments: Segment[] = [];
+  const segments = new Array<Segment>();
   for (let i = 0; i < parts.length; i++) {
     const q = [...blendedParts[i]!, blendedParts[(i + 1) % parts.length]![0]!];
     segments.push(...(collinear(q) ? [lineSegment(q[0]!, q[q.length - 1]!)] : smoothThrough(q)));
   }
   // anchor j's blended point is the first point of the first part of stretch j
   const anchorPoint = (j: number): Point => blendedParts[parts.findIndex((p) => p.stretch === j)]![0]!;
-  const contour: Contour = { segments, closed: true };
+  const contour = contourOf(segments, true);
   const label = op.levels.map((l) => `${l.level} ${l.size}`).join(' · ');
   assertSimple(contour, `blend of piece "${piece.name}"`);
   const points: Landmark[] = anchors
