@@ -13,10 +13,11 @@ import { MakeEntity } from './modules/makes/make.entity.ts';
 import { MakeRevisionEntity } from './modules/makes/make-revision.entity.ts';
 import { Fabrics1764892800000 } from './migrations/1764892800000-Fabrics.ts';
 import { FitPlanner1764979200000 } from './migrations/1764979200000-FitPlanner.ts';
+import { PrintMakes1765065600000 } from './migrations/1765065600000-PrintMakes.ts';
 import { FabricEntity } from './modules/fabrics/fabric.entity.ts';
 
 export const entities = [UserEntity, PasswordResetTokenEntity, PrintJobEntity, PatternEntity, ProfileEntity, ProfileMeasurementSetEntity, MakeEntity, MakeRevisionEntity, FabricEntity];
-export const migrations = [Foundation1764633600000, PrintJobs1764720000000, Workspace1764806400000, Fabrics1764892800000, FitPlanner1764979200000];
+export const migrations = [Foundation1764633600000, PrintJobs1764720000000, Workspace1764806400000, Fabrics1764892800000, FitPlanner1764979200000, PrintMakes1765065600000];
 
 /** The app's DataSource. Schema changes go through migrations only (`synchronize` is off). */
 export function createDataSource(url: string): DataSource {

@@ -218,6 +218,32 @@ describe('printing a make', () => {
     expect((await rui.send('post', '/api/prints', { makeId: seeded.id, options: {} })).status).toBe(403);
     expect((await ada.send('post', '/api/prints', { makeId: 'nope', options: {} })).status).toBe(400);
   });
+
+  it('when a sewist has printed two makes and a bare pattern, then each make lists only its own prints, newest first', async () => {
+    const first = await newMake(ada, 'Print list one');
+    const second = await newMake(ada, 'Print list two');
+    const queue = async (body: object) => {
+      const res = await ada.send('post', '/api/prints', body);
+      expect(res.status).toBe(202);
+      return res.body.print as { id: string; makeId: string | null };
+    };
+    const a1 = await queue({ makeId: first.id, options: { format: 'svg' } });
+    const b1 = await queue({ makeId: second.id, options: { format: 'svg' } });
+    const a2 = await queue({ makeId: first.id, options: { format: 'svg' } });
+    const bare = await queue({ pattern: demoPattern(), options: { format: 'svg', size: '8' } });
+    expect([a1.makeId, b1.makeId, bare.makeId]).toEqual([first.id, second.id, null]);
+
+    const ids = async (c: Client, query: string) => ((await c.get(`/api/prints${query}`).expect(200)).body.prints as { id: string }[]).map((p) => p.id);
+    expect(await ids(ada, `?makeId=${first.id}`)).toEqual([a2.id, a1.id]);
+    expect(await ids(ada, `?makeId=${second.id}`)).toEqual([b1.id]);
+    const all = await ids(ada, '');
+    for (const id of [a1.id, a2.id, b1.id, bare.id]) expect(all).toContain(id);
+    // another user's list never shows them, even asked by the make's id
+    expect(await ids(rui, `?makeId=${first.id}`)).toEqual([]);
+    const bad = await ada.get('/api/prints?makeId=nope');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error).toMatchObject({ code: 'invalid_input', fields: { makeId: 'Not a valid make id.' } });
+  });
 });
 
 describe('profiles and units', () => {

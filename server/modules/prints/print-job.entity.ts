@@ -11,6 +11,10 @@ export class PrintJobEntity {
   @Column('uuid', { name: 'owner_id' })
   ownerId: string;
 
+  /** The make printed; null for a pattern sent as it is. */
+  @Column('uuid', { name: 'make_id', nullable: true })
+  makeId: string | null;
+
   @Column('text')
   status: PrintStatus;
 

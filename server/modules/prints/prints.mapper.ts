@@ -2,6 +2,8 @@ import type { PrintJobEntity } from './print-job.entity.ts';
 
 export interface PrintJobDto {
   id: string;
+  /** The make printed, if it was a make (and still exists). */
+  makeId: string | null;
   status: PrintJobEntity['status'];
   progress: number;
   format: 'pdf' | 'svg';
@@ -19,6 +21,7 @@ export interface PrintJobDto {
 
 export const toPrintJobDto = (p: PrintJobEntity): PrintJobDto => ({
   id: p.id,
+  makeId: p.makeId,
   status: p.status,
   progress: p.progress,
   format: p.format,

@@ -19,6 +19,9 @@ const createSchema = z.union(
   { error: 'Send either a pattern or a makeId, with options.' },
 );
 
+/** `?makeId=` lists the prints of that make only. */
+const listQuerySchema = z.object({ makeId: z.uuid({ error: 'Not a valid make id.' }).optional() });
+
 const safeFileName = (title: string) => title.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'pattern';
 
 /** Prints of the signed-in user: queue one, follow its progress, download the file again later. */
@@ -33,7 +36,8 @@ export function printsRouter(deps: { prints: PrintsService }): Router {
   });
 
   router.get('/', async (req, res) => {
-    const jobs = await deps.prints.list(currentUser(req).id);
+    const filter = parseInput(listQuerySchema, req.query, 'query');
+    const jobs = await deps.prints.list(currentUser(req).id, filter);
     res.json({ prints: jobs.map(toPrintJobDto) });
   });
 

@@ -51,6 +51,7 @@ export class PrintsService {
     const job = await this.repo.save(
       this.repo.create({
         ownerId,
+        makeId: 'makeId' in input ? input.makeId : null,
         status: 'queued',
         progress: 0,
         format: options.format,
@@ -69,8 +70,9 @@ export class PrintsService {
     return job;
   }
 
-  list(ownerId: string): Promise<PrintJobEntity[]> {
-    return this.repo.find({ where: { ownerId }, order: { createdAt: 'DESC' }, take: 100 });
+  /** The user's newest 100 prints, or those of one make. */
+  list(ownerId: string, filter: { makeId?: string } = {}): Promise<PrintJobEntity[]> {
+    return this.repo.find({ where: { ownerId, ...(filter.makeId !== undefined ? { makeId: filter.makeId } : {}) }, order: { createdAt: 'DESC' }, take: 100 });
   }
 
   /** The job when it is the user's; 404 when it does not exist, 403 when it is someone else's. */

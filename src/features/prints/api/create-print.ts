@@ -17,7 +17,7 @@ export function useCreatePrint({ onSuccess }: { onSuccess?: (print: PrintJob) =>
     mutationFn: createPrint,
     onSuccess: async (print) => {
       queryClient.setQueryData(printKeys.detail(print.id), print);
-      await queryClient.invalidateQueries({ queryKey: printKeys.list() });
+      await queryClient.invalidateQueries({ queryKey: printKeys.lists() });
       onSuccess?.(print);
     },
   });

@@ -6,6 +6,8 @@ export type PrintStatus = z.infer<typeof printStatusSchema>;
 
 export const printJobSchema = z.object({
   id: z.string(),
+  /** The make printed; null for a pattern sent as it is. */
+  makeId: z.string().nullable(),
   status: printStatusSchema,
   progress: z.number(),
   format: z.enum(['pdf', 'svg']),

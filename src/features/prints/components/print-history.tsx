@@ -7,9 +7,12 @@ import { DownloadLink, fileSizeText, pagesText } from './print-status';
 
 const madeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
-/** Every print of the signed-in user, newest first; the files are kept, so each can be fetched again. */
-export function PrintHistory({ title = 'Earlier prints' }: { title?: string }) {
-  const prints = usePrints();
+/**
+ * The signed-in user's prints, newest first, or only those of one make; the files are kept, so
+ * each can be fetched again.
+ */
+export function PrintHistory({ title = 'Earlier prints', makeId }: { title?: string; makeId?: string }) {
+  const prints = usePrints(makeId === undefined ? {} : { makeId });
   return (
     <section aria-label={title}>
       <h3 className="mb-2 text-base font-semibold">{title}</h3>
@@ -18,7 +21,7 @@ export function PrintHistory({ title = 'Earlier prints' }: { title?: string }) {
       ) : prints.isError ? (
         <FormAlert>{formErrorsOf({}, prints.error).message}</FormAlert>
       ) : prints.data.length === 0 ? (
-        <p className="text-sm text-ink-700">No prints yet.</p>
+        <p className="text-sm text-ink-700">{makeId === undefined ? 'No prints yet.' : 'No prints of this make yet.'}</p>
       ) : (
         <ul className="flex flex-col divide-y divide-dashed divide-calico-300 text-sm">
           {prints.data.map((job) => (

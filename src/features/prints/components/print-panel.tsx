@@ -87,7 +87,7 @@ function PrintCaution() {
  * Print a make's newest revision: the options (format, paper, orientation, margin and overlap in
  * the user's units, quarter turns, the size while pieces still carry several), the scale caution,
  * then the job's progress, its download link, page count and the empty pages left out; below,
- * the user's earlier prints.
+ * the earlier prints of this make.
  */
 export function PrintPanel({
   makeId,
@@ -105,7 +105,7 @@ export function PrintPanel({
   sizes?: readonly string[];
   /** True when the make's alterations blend sizes, so each piece has one outline left. */
   blended?: boolean;
-  /** Show the list of the user's earlier prints under the panel. */
+  /** Show the earlier prints of this make under the panel. */
   showHistory?: boolean;
 }) {
   const queryClient = useQueryClient();
@@ -127,7 +127,7 @@ export function PrintPanel({
   // A finished job changes the list of earlier prints.
   const finished = job.data?.status === 'done' || job.data?.status === 'failed';
   useEffect(() => {
-    if (finished) void queryClient.invalidateQueries({ queryKey: printKeys.list() });
+    if (finished) void queryClient.invalidateQueries({ queryKey: printKeys.lists() });
   }, [finished, queryClient]);
 
   const tiled = paperGroups[0]!.papers.some((each) => each.id === paper);
@@ -260,7 +260,7 @@ export function PrintPanel({
       </form>
       {job.data && <PrintStatus job={job.data} />}
       {job.isError && <FormAlert>The progress of the print could not be read; it may still finish. See the list below.</FormAlert>}
-      {showHistory && <PrintHistory />}
+      {showHistory && <PrintHistory makeId={makeId} />}
     </div>
   );
 }
