@@ -1,7 +1,7 @@
 import { PageHeading } from '../../components/ui/page-heading';
-import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
+import { StartMakeLink } from '../../features/makes/components/start-make-link';
 import { PatternLibrary } from '../../features/patterns/components/pattern-library';
 
 /** The shared library: patterns coaches have published, ready to start a make from. */
@@ -18,11 +18,7 @@ export function LibraryRoute() {
         sections={['library']}
         me={me}
         reviewHref={paths.patternReview.build}
-        startMake={(pattern) => (
-          <TextLink to={paths.makes.build({ newFromPattern: pattern.id })} aria-label={`Start a make from ${pattern.name}`}>
-            Start a make
-          </TextLink>
-        )}
+        startMake={(pattern) => <StartMakeLink pattern={pattern} />}
       />
     </>
   );

@@ -9,6 +9,7 @@ import { usePattern } from '../../features/patterns/api/get-pattern';
 import { PatternReview } from '../../features/patterns/components/pattern-review';
 import { SizeTable } from '../../features/patterns/components/size-table';
 import { piecesIncludeSeamAllowance } from '../../features/patterns/model/size-chart';
+import { StartMakeLink } from '../../features/makes/components/start-make-link';
 
 /** One pattern: its owner reviews and labels it; anyone else who may see it reads it and can start a make. */
 export function PatternReviewRoute() {
@@ -34,11 +35,7 @@ export function PatternReviewRoute() {
       <PatternReview
         detail={detail}
         units={me.units}
-        startMake={
-          <TextLink to={paths.makes.build({ newFromPattern: detail.id })} aria-label={`Start a make from ${detail.name}`}>
-            Start a make
-          </TextLink>
-        }
+        startMake={<StartMakeLink pattern={detail} />}
       />
       <div className="mt-8">
         <SizeTable patternId={detail.id} units={me.units} canEdit={detail.canEdit} includesSeamAllowance={piecesIncludeSeamAllowance(detail.pattern)} />

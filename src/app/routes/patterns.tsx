@@ -1,11 +1,11 @@
 import { useNavigate } from 'react-router-dom';
 import { PageHeading } from '../../components/ui/page-heading';
 import { Panel } from '../../components/ui/panel';
-import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
 import { PatternLibrary } from '../../features/patterns/components/pattern-library';
 import { PatternUpload } from '../../features/patterns/components/pattern-upload';
+import { StartMakeLink } from '../../features/makes/components/start-make-link';
 
 /** Your patterns and the upload form; a new upload opens its review. */
 export function PatternsRoute() {
@@ -23,11 +23,7 @@ export function PatternsRoute() {
           sections={['mine']}
           me={me}
           reviewHref={paths.patternReview.build}
-          startMake={(pattern) => (
-            <TextLink to={paths.makes.build({ newFromPattern: pattern.id })} aria-label={`Start a make from ${pattern.name}`}>
-              Start a make
-            </TextLink>
-          )}
+          startMake={(pattern) => <StartMakeLink pattern={pattern} />}
         />
         <Panel title="Upload a pattern">
           <PatternUpload onUploaded={(pattern) => navigate(paths.patternReview.build(pattern.id))} />
