@@ -74,6 +74,23 @@ describe('dated measurement profiles', () => {
     expect(list.find((x) => x.id === p0.id)!.history).toBeUndefined();
   });
 
+  it('when two saves of one profile arrive at the same moment, then both sets are appended and the newer one carries the other change too', async () => {
+    const p = (await ada.send('post', '/api/profiles', { name: 'Saved twice', takenOn: '2026-03-01', measurements: { waistGirth: 760, hipGirth: 940 } })).body.profile as ProfileDto;
+    for (let round = 1; round <= 20; round++) {
+      const takenOn = `2026-04-${String(round).padStart(2, '0')}`; // a later date each round: the newest set is this round's
+      // one save changes only the girths at heights, the other only the measurements: each copies
+      // what it does not send from the current set, which the row lock makes the other's
+      const [heights, girths] = await Promise.all([
+        ada.send('patch', `/api/profiles/${p.id}`, { takenOn, girthsAtHeights: [{ offset: 40, girth: 800 + round }] }),
+        ada.send('patch', `/api/profiles/${p.id}`, { takenOn, measurements: { waistGirth: 760 + round, hipGirth: 940 + round } }),
+      ]);
+      expect([heights.status, girths.status]).toEqual([200, 200]);
+      const now = (await ada.get(`/api/profiles/${p.id}`).expect(200)).body.profile as ProfileDto;
+      expect(now.history).toHaveLength(1 + 2 * round);
+      expect(now).toMatchObject({ takenOn, measurements: { waistGirth: 760 + round, hipGirth: 940 + round }, girthsAtHeights: [{ offset: 40, girth: 800 + round }] });
+    }
+  });
+
   it('when someone tries to rewrite history in the database, then it refuses (append-only)', async () => {
     await expect(t.database.db.query(`UPDATE profile_measurement_sets SET note = 'changed'`)).rejects.toThrow(/append-only/);
   });
