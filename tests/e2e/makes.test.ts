@@ -160,5 +160,24 @@ describe('when Rui switches to centimetres and prints a make', () => {
     // The print stays in the list of earlier prints, with its download link.
     const history = dialog.getByRole('region', { name: 'Earlier prints' });
     await history.getByRole('link', { name: 'Download Linen summer trousers (PDF)' }).waitFor();
+
+    // A print of another make is listed with that make, not with this one.
+    const linen = (await session.getJson<{ makes: (MakeSummary & { pattern: { id: string } })[] }>(page, '/api/makes')).makes.find((m) => m.name === 'Linen summer trousers')!;
+    const csrf = ((await (await page.request.get(`${session.url}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
+    const headers = { 'x-csrf-token': csrf };
+    const second = await page.request.post(`${session.url}/api/makes`, { data: { name: 'Second linen pair', patternId: linen.pattern.id }, headers });
+    expect(second.status()).toBe(201);
+    const secondId = ((await second.json()) as { make: MakeSummary }).make.id;
+    expect((await page.request.post(`${session.url}/api/prints`, { data: { makeId: secondId, options: { format: 'svg' } }, headers })).status()).toBe(202);
+    await dialog.getByRole('button', { name: 'Close' }).click();
+    await page.getByRole('button', { name: 'Print Linen summer trousers' }).click();
+    await history.getByRole('link', { name: 'Download Linen summer trousers (PDF)' }).waitFor();
+    expect(await history.getByText('Second linen pair').count()).toBe(0);
+    await page.getByRole('dialog', { name: 'Linen summer trousers' }).getByRole('button', { name: 'Close' }).click();
+    await page.reload(); // the make was started through the API, after the list was loaded
+    await page.getByRole('button', { name: 'Print Second linen pair' }).click();
+    const secondHistory = page.getByRole('dialog', { name: 'Second linen pair' }).getByRole('region', { name: 'Earlier prints' });
+    await secondHistory.getByText('Second linen pair').waitFor();
+    expect(await secondHistory.getByText('Linen summer trousers').count()).toBe(0);
   });
 });
