@@ -1249,7 +1249,7 @@ function rememberFlattenings(s: Segment, kept: CubicFlattening[]): void {
 /** The most tolerances kept per cubic (the oldest is dropped). */
 const CUBIC_FLATTEN_KEEP = 3;
 
-function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: number): CubicFlattening {
+function cubicFlattening(s: CubicSegment, tolerance: number): CubicFlattening {
   let kept = CUBIC_FLATTEN_CACHE.get(s);
   if (!kept) {
     const local = deferred?.flattenings;
@@ -1299,7 +1299,7 @@ function cubicFlattening(s: Extract<Segment, { kind: 'cubic' }>, tolerance: numb
 }
 
 /** The points of a cubic's flattening (the start and t = 1 as the segment's own points), made once per flattening. */
-function flatteningPoints(s: Extract<Segment, { kind: 'cubic' }>, f: CubicFlattening): readonly Point[] {
+function flatteningPoints(s: CubicSegment, f: CubicFlattening): readonly Point[] {
   if (f.points) return f.points;
   const n = f.ts.length;
   const points = new Array<Point>(n);

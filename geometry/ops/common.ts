@@ -16,6 +16,7 @@ import {
   lineSegment,
   contourOf,
   curveSegment,
+  type CubicSegment,
   type Segment,
 } from '../path.ts';
 import { PARAM_EPSILON, REDRAW_CHECKS, REDRAW_TOLERANCE, SMOOTH_MERGE_TOLERANCE } from '../tolerance.ts';
@@ -306,7 +307,7 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
     return pt(a * q[k - 1]!.x + b * q[k]!.x + c * q[k + 1]!.x, a * q[k - 1]!.y + b * q[k]!.y + c * q[k + 1]!.y);
   };
   const t = Array.from({ length: n + 1 }, (_, k) => tangent(k));
-  const hermite = (k: number, m: number, len: number): Segment => {
+  const hermite = (k: number, m: number, len: number): CubicSegment => {
     const a = q[k]!;
     const b = q[m]!;
     return curveSegment(a, pt(a.x + (t[k]!.x * len) / 3, a.y + (t[k]!.y * len) / 3), pt(b.x - (t[m]!.x * len) / 3, b.y - (t[m]!.y * len) / 3), b);
@@ -317,9 +318,9 @@ export function smoothThrough(q: readonly Point[], mergeTolerance = SMOOTH_MERGE
   const cum = [0];
   for (let k = 0; k < n; k++) cum.push(cum[k]! + h[k]!);
   const tol2 = mergeTolerance * mergeTolerance;
-  const fits = (k: number, m: number): Segment | undefined => {
+  const fits = (k: number, m: number): CubicSegment | undefined => {
     const len = cum[m]! - cum[k]!;
-    const seg = hermite(k, m, len) as Extract<Segment, { kind: 'cubic' }>;
+    const seg = hermite(k, m, len);
     const { from: p0, c1: p1, c2: p2, to: p3 } = seg;
     for (let i = k + 1; i < m; i++) {
       // vecDistance(cubicPoint(seg, u), q[i]) > mergeTolerance, with cubicPoint's arithmetic
