@@ -2,7 +2,7 @@ import type { PrintJobEntity } from './print-job.entity.ts';
 
 export interface PrintJobDto {
   id: string;
-  /** The make printed, if it was a make (and still exists). */
+  /** The make printed; null for a pattern sent as it is. */
   makeId: string | null;
   status: PrintJobEntity['status'];
   progress: number;
