@@ -248,7 +248,7 @@ function deformSegmentInto(s: Segment, field: Field, out: Segment[]): boolean {
       out.push(part);
       continue;
     }
-    const affine = field.affineOn(part, segmentPointThen(s, (t0 + t1) / 2, asPoint));
+    const affine = field.affineOn(part, segmentPointThen(s, (t0 + t1) / 2, pt));
     if (affine) out.push(segmentMapPoints(part, affine));
     else {
       const redrawn = redrawMapped(s, t0, t1, field.smooth);
@@ -257,8 +257,6 @@ function deformSegmentInto(s: Segment, field: Field, out: Segment[]): boolean {
   }
   return true;
 }
-
-const asPoint = pt;
 
 function deformPath(path: Path, field: Field): Path {
   let changed = false;

@@ -609,10 +609,13 @@ function innerHalvesInside(
       const d4 = orient(ax[e]!, ay[e]!, bx[e]!, by[e]!, bx[o]!, by[o]!);
       if (d3 * d4 <= 0) return false;
     }
-    if (probe) liveEdges = kept;
-    else liveProbes = kept;
-    if (probe) activeProbes[liveProbes++] = e;
-    else activeEdges[liveEdges++] = e;
+    if (probe) {
+      liveEdges = kept;
+      activeProbes[liveProbes++] = e;
+    } else {
+      liveProbes = kept;
+      activeEdges[liveEdges++] = e;
+    }
   }
   return true;
 }

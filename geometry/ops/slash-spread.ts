@@ -70,13 +70,13 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   const hiOld = w / 2 + Math.max(0, -theta);
   const hiNew = w / 2 + Math.max(0, theta);
   // ψ: signed angle from the slash ray, positive toward the moving side
-  const psi = (p: Point): number => side * vecAngleBetween(ray, vecSub(p, hinge));
-  // ψ of the point (x, y): vecAngleBetween's arithmetic on numbers, without the point objects
+  // (vecAngleBetween(ray, vecSub(p, hinge)) written out on numbers, so no point objects are made)
   const psiXY = (x: number, y: number): number => {
     const vx = x - hinge.x;
     const vy = y - hinge.y;
     return side * Math.atan2(ray.x * vy - ray.y * vx, ray.x * vx + ray.y * vy);
   };
+  const psi = (p: Point): number => psiXY(p.x, p.y);
   const f = (s: number): number => {
     if (s <= lo) return s;
     if (s < hiOld) return lo + ((s - lo) * (hiNew - lo)) / (hiOld - lo);
@@ -87,8 +87,8 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
     const s = psi(p);
     return side * (f(s) - s);
   };
-  const region = (p: Point): 0 | 1 | 2 => {
-    const s = psi(p);
+  const regionXY = (x: number, y: number): 0 | 1 | 2 => {
+    const s = psiXY(x, y);
     return s <= lo ? 0 : s < hiOld ? 2 : 1;
   };
   // inside the zone the turn is side·(f(s) − s) = side·(r − 1)·(s − lo), s = side·angle(ray, p − H),
@@ -97,21 +97,19 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   const smooth: SmoothPlaneMap = (x, y, out) => {
     // turn(p) and region(p) below, with the distance to the hinge and the angle ψ found once;
     // the rotation about the hinge is vecRotateAbout's arithmetic on numbers
-    const dx = x - hinge.x;
-    const dy = y - hinge.y;
-    const near = vecHypot(dx, dy) < 1e-9;
+    const vx = x - hinge.x;
+    const vy = y - hinge.y;
+    const near = vecHypot(vx, vy) < 1e-9;
     const s = near ? 0 : psiXY(x, y);
     const a = near ? 0 : side * (f(s) - s);
     const c = Math.cos(a);
     const sn = Math.sin(a);
-    out[0] = hinge.x + (dx * c - dy * sn);
-    out[1] = hinge.y + (dx * sn + dy * c);
+    out[0] = hinge.x + (vx * c - vy * sn);
+    out[1] = hinge.y + (vx * sn + vy * c);
     out[2] = c;
     out[3] = -sn;
     out[4] = sn;
     out[5] = c;
-    const vx = x - hinge.x;
-    const vy = y - hinge.y;
     const v2 = vx * vx + vy * vy;
     if (near || s <= lo || !(s < hiOld)) return; // not in the zone (region(p) !== 2)
     // J = R + (R·perp(v)) ⊗ ∇turn
@@ -127,11 +125,8 @@ function wedgeMap(hinge: Point, e: Point, side: 1 | -1, theta: number, zone: num
   return {
     turn,
     map: (p) => vecRotateAbout(p, hinge, turn(p)),
-    region,
-    regionXY: (x, y) => {
-      const s = psiXY(x, y);
-      return s <= lo ? 0 : s < hiOld ? 2 : 1;
-    },
+    region: (p) => regionXY(p.x, p.y),
+    regionXY,
     cuts: [
       { origin: hinge, direction: vecRotate(ray, side * lo) },
       { origin: hinge, direction: vecRotate(ray, side * hiOld) },
