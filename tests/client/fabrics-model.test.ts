@@ -159,18 +159,26 @@ describe('readFabricDraft', () => {
   });
 
   it('whatever the form accepts, geometry\'s fabric schema (the server\'s check) accepts too (property)', () => {
-    const len = fc.double({ min: 1, max: 2000, noNaN: true }).map((mm) => `${Math.round(mm) / 10} cm`);
-    const pct = (max: number) => fc.double({ min: -max, max, noNaN: true }).map((v) => `${Math.round(v * 100) / 100}`);
-    const stretch = fc.record({ how: fc.constantFrom('test' as const, 'percent' as const), percent: pct(320), relaxed: len, stretched: len });
-    const shrink = fc.record({ how: fc.constantFrom('test' as const, 'percent' as const), percent: pct(35), before: len, after: len });
+    // Each field mostly in its range (so most drafts are accepted and the property has many
+    // cases), sometimes just past either end of it (so the bounds and the refusals are reached too).
+    const mostly = <T,>(inRange: fc.Arbitrary<T>, outside: fc.Arbitrary<T>) => fc.oneof({ weight: 9, arbitrary: inRange }, { weight: 1, arbitrary: outside });
+    const num = (min: number, max: number) => fc.double({ min, max, noNaN: true }).map((v) => `${Math.round(v * 100) / 100}`);
+    const pct = (min: number, max: number) => mostly(num(min, max), fc.oneof(num(min - 0.2 * (max - min), min), num(max, max + 0.2 * (max - min))));
+    const mm = fc.double({ min: 1, max: 2000, noNaN: true }).map((v) => Math.round(v));
+    const cm = (v: number) => `${v / 10} cm`;
+    // a pair of lengths: the second the first times a factor, mostly between lo and hi, else anything
+    const pair = (lo: number, hi: number) =>
+      fc.tuple(mm, mostly(fc.double({ min: lo, max: hi, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }))).map(([a, k]) => [cm(a), cm(Math.max(1, Math.round(a * k)))] as const);
+    const stretch = fc.record({ how: fc.constantFrom('test' as const, 'percent' as const), percent: pct(0, 300), lengths: pair(1, 4) }).map(({ how, percent, lengths: [relaxed, stretched] }) => ({ how, percent, relaxed, stretched }));
+    const shrink = fc.record({ how: fc.constantFrom('test' as const, 'percent' as const), percent: pct(-30, 30), lengths: pair(0.7, 1.3) }).map(({ how, percent, lengths: [before, after] }) => ({ how, percent, before, after }));
     const draft = fc.record({
-      name: fc.constantFrom('Cloth', ''),
+      name: mostly(fc.constant('Cloth'), fc.constant('')),
       stretchAcross: stretch,
       stretchAlong: stretch,
-      recovery: fc.oneof(fc.constant(''), pct(110)),
+      recovery: fc.oneof(fc.constant(''), pct(0, 100)),
       weightUnit: fc.constantFrom('gsm' as const, 'oz' as const),
-      weight: fc.oneof(fc.constant(''), pct(2100)),
-      width: fc.oneof(fc.constant(''), len),
+      weight: fc.oneof(fc.constant(''), pct(0, 60), pct(0, 2000)),
+      width: fc.oneof(fc.constant(''), mm.map(cm)),
       warp: shrink,
       weft: shrink,
       prewashed: fc.boolean(),
@@ -187,7 +195,8 @@ describe('readFabricDraft', () => {
       }),
       { numRuns: 2000 },
     );
-    expect(accepted).toBeGreaterThan(20); // the property is not vacuous
+    // not vacuous: 398–446 of the 2000 drafts were accepted in five runs (the bound is six standard deviations below)
+    expect(accepted).toBeGreaterThan(300);
   });
 
   it('a fabric shown in the form and saved unchanged keeps its properties exactly', () => {
