@@ -91,6 +91,16 @@ describe('sign-in and sign-out', () => {
     expect(res.body.error.code).toBe('invalid_credentials');
   });
 
+  it('when the e-mail is not a string (even an object whose toString is not a function), then 400 with the field', async () => {
+    const c = new Client(t.app);
+    for (const email of [{ toString: [] }, ['ada@loomhollow.example'], 42, null]) {
+      const res = await c.send('post', '/api/auth/sign-in', { email, password: DEMO_PASSWORD });
+      expect(res.status).toBe(400);
+      expect(res.body.error.code).toBe('invalid_input');
+      expect(Object.keys(res.body.error.fields)).toContain('email');
+    }
+  });
+
   it('when signed out, then /me is 401 again', async () => {
     const c = new Client(t.app);
     await c.signIn('mina@loomhollow.example', DEMO_PASSWORD);

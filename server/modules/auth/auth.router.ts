@@ -48,7 +48,11 @@ export function authRouter(deps: AuthRouterDeps): Router {
     skipSuccessfulRequests: true,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
+    // The body is not parsed yet: only a string e-mail joins the key (an object's own toString may throw).
+    keyGenerator: (req) => {
+      const email: unknown = req.body?.email;
+      return `${ipKeyGenerator(req.ip ?? '')}|${typeof email === 'string' ? email.toLowerCase() : ''}`;
+    },
     handler: (_req, _res, next) => next(tooMany()),
   });
   const resetLimiter = rateLimit({
