@@ -7,6 +7,7 @@ export * from './vec.ts';
 export * from './bezier.ts';
 export * from './path.ts';
 export * from './model.ts';
+export * from './sizes.ts';
 export * from './demo-pattern.ts';
 export * from './measure.ts';
 export * from './units.ts';

@@ -7,6 +7,7 @@
  */
 import { z } from 'zod';
 import { type Contour, type Path, PathDataError, contourNearest, pathFromSvg } from './path.ts';
+import { sizeNumber } from './sizes.ts';
 import { POINT_EPSILON } from './tolerance.ts';
 import { type Point, vecHypot } from './vec.ts';
 
@@ -169,12 +170,6 @@ export function outlineContour(outline: Pick<Outline, 'd' | 'size'>): Contour {
   return p[0]!;
 }
 
-/** Numeric value of a size label ("8" → 8, "10.5" → 10.5), or undefined when not a plain number. */
-export function sizeNumber(size: string): number | undefined {
-  const t = size.trim();
-  if (!/^[-+]?\d+(\.\d+)?$/.test(t)) return undefined;
-  return Number(t);
-}
 
 /** Every size label of the pattern, smallest first when they are all numbers, else in the order met. */
 export function patternSizes(pattern: Pattern): string[] {

@@ -13,7 +13,8 @@
  * body's seated rise is measured).
  */
 import { z } from 'zod';
-import { type Pattern, type Piece, landmarkOf, orderedOutlines, sizeNumber } from '../model.ts';
+import { type Pattern, type Piece, landmarkOf, orderedOutlines } from '../model.ts';
+import { matchSizeLabel, sizeNumber } from '../sizes.ts';
 import { crotchLength, edgeLength, widthAtLevel } from '../measure.ts';
 import { pieceGrain } from '../ops/common.ts';
 import { BODY_MEASUREMENT_NAMES, FitInputError, describeZodError } from './body.ts';
@@ -195,11 +196,33 @@ export function chartFromPattern(pattern: Pattern, options: ChartFromPatternOpti
 }
 
 /**
+ * The table with each size labelled as the pattern labels it when the two are written
+ * differently ("Size 08" → "8", "xl" → "XL"; see `matchSizeLabel`). A label the pattern has
+ * exactly, or matches no size or several, stays; so does one whose pattern label another row
+ * already uses. The measurements are never changed. The same object when nothing is relabelled.
+ */
+export function alignChartSizes(chart: SizeChart, sizes: readonly string[]): SizeChart {
+  const taken = new Set(chart.sizes.filter((s) => sizes.includes(s.size)).map((s) => s.size));
+  let changed = false;
+  const out = chart.sizes.map((s) => {
+    if (taken.has(s.size)) return s;
+    const to = matchSizeLabel(s.size, sizes);
+    if (to === undefined || taken.has(to)) return s;
+    taken.add(to);
+    changed = true;
+    return { ...s, size: to };
+  });
+  return changed ? { ...chart, sizes: out } : chart;
+}
+
+/**
  * A printed table with its gaps filled from another (the one measured on the pieces): for each
  * size both tables have, a finished measurement the printed table leaves out is taken from the
- * other, and `notes` says which. The printed numbers themselves are never changed.
+ * other, and `notes` says which. The sizes are matched as `alignChartSizes` matches them (and
+ * take the measured table's labels); the printed numbers themselves are never changed.
  */
-export function fillChartGaps(printed: SizeChart, measured: SizeChart): SizeChart {
+export function fillChartGaps(printedAsTyped: SizeChart, measured: SizeChart): SizeChart {
+  const printed = alignChartSizes(printedAsTyped, measured.sizes.map((m) => m.size));
   const filled = new Map<string, string[]>();
   const sizes = printed.sizes.map((s) => {
     const other = measured.sizes.find((m) => m.size === s.size);

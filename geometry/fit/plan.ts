@@ -35,12 +35,13 @@
  * Pure and deterministic: the same input gives the same plan.
  */
 import { z } from 'zod';
-import { type Pattern, type Piece, parsePattern, sizeNumber } from '../model.ts';
+import { type Pattern, type Piece, parsePattern, patternSizes } from '../model.ts';
+import { sizeNumber } from '../sizes.ts';
 import type { AlterationOp } from '../ops/apply.ts';
 import { applyOps } from '../ops/apply.ts';
 import { type LengthUnit, formatLength } from '../units.ts';
 import { type BodyProfile, type FabricSummary, FitInputError, describeZodError, girthAtOffset, parseBodyProfile, parseFabric } from './body.ts';
-import { type ChartSize, type GarmentMeasure, type SizeChart, chartFromPattern, orderedChartSizes, parseSizeChart } from './chart.ts';
+import { type ChartSize, type GarmentMeasure, type SizeChart, alignChartSizes, chartFromPattern, orderedChartSizes, parseSizeChart } from './chart.ts';
 import { noteCorrections, parseFitNote } from './notes.ts';
 
 /** The levels the planner sizes, top to bottom. The hem is a style choice, not fitted to the body. */
@@ -343,7 +344,8 @@ export function planFit(input: PlanInput): FitPlan {
     }
   }
   if (chartInput === undefined && pattern === undefined) throw new FitInputError('give a size table or a pattern to measure');
-  const chart = chartInput !== undefined ? parseSizeChart(chartInput) : chartFromPattern(pattern!, opts.seamAllowance !== undefined ? { seamAllowance: opts.seamAllowance } : {});
+  // a typed table's sizes take the pattern's labels ("Size 08" → "8"), so the blend names sizes the pattern has
+  const chart = chartInput !== undefined ? (pattern ? alignChartSizes(parseSizeChart(chartInput), patternSizes(pattern)) : parseSizeChart(chartInput)) : chartFromPattern(pattern!, opts.seamAllowance !== undefined ? { seamAllowance: opts.seamAllowance } : {});
   const scale = scaleOf(chart);
   const unit: LengthUnit = opts.unit;
   const L = (v: number): string => formatLength(v, unit);

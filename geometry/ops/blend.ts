@@ -19,7 +19,8 @@
  * waistband) takes the size named at its top-most level, i.e. the first entry (with a caution).
  */
 import { z } from 'zod';
-import { type Landmark, type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, orderedOutlines, outlineContour, sizeNumber } from '../model.ts';
+import { type Landmark, type Outline, type Pattern, type PatternLine, type Piece, landmarkOf, orderedOutlines, outlineContour } from '../model.ts';
+import { sizeNumber } from '../sizes.ts';
 import {
   type Contour,
   type Segment,

@@ -10,6 +10,7 @@ import {
   FIT_GIRTH_TOLERANCE as CLIENT_GIRTH_TOLERANCE,
   FIT_LENGTH_TOLERANCE as CLIENT_LENGTH_TOLERANCE,
   GARMENT_COLUMNS,
+  asPatternSize,
   cellKey,
   chartInputFromDraft,
   columnForHeading,
@@ -146,6 +147,23 @@ describe('pasting a table', () => {
     expect(wide.errors[0]).toMatch(/3 measurements but the table has 2 columns/);
     expect(parsePastedTable('  \n', { kind: 'garment', unit: 'cm' }).errors[0]).toMatch(/^Nothing to paste/);
     expect(parsePastedTable('Size\tWaist\tWaist girth\n8\t1\t2', { kind: 'garment', unit: 'cm' }).errors[0]).toMatch(/both name Waist/);
+  });
+
+  it('when the pasted sizes are written differently from the pattern\'s, then they take its labels and a note says so', () => {
+    const r = parsePastedTable('Size\tWaist\nSize 08\t70\nsize 10\t75\nxl\t80\n12\t85', { kind: 'garment', unit: 'cm', sizes: ['8', '10', 'XL'] });
+    expect(r.errors).toEqual([]);
+    expect(r.rows.map((row) => row.size)).toEqual(['8', '10', 'XL', '12']);
+    expect(r.notes).toContain('Sizes named as the pattern names them: Size 08 → 8, size 10 → 10, xl → XL.');
+    // two ways of writing one size are one size twice
+    expect(parsePastedTable('8\t70\n08\t71', { kind: 'garment', unit: 'cm', order: ['waist'], sizes: ['8'] }).errors).toEqual(['Line 2: size “8” appears twice.']);
+    // without the pattern's sizes, what was typed stays
+    expect(parsePastedTable('Size 08\t70', { kind: 'garment', unit: 'cm', order: ['waist'] }).rows[0]!.size).toBe('Size 08');
+  });
+
+  it('a typed size takes the pattern\'s label unless another row already has it', () => {
+    expect(asPatternSize('Size 8', ['6', '8'])).toBe('8');
+    expect(asPatternSize('Size 8', ['6', '8'], ['6', '8'])).toBe('Size 8');
+    expect(asPatternSize('Size 9', ['6', '8'])).toBe('Size 9');
   });
 
   it('when a body chart is pasted, then the ISO names are the columns', () => {

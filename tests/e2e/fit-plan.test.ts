@@ -210,7 +210,8 @@ describe('the pattern\'s size table', () => {
     const [a, b] = measured.sizes;
     const inches = (mm: number) => `${(mm / IN).toFixed(3)}`;
     // Size a: as measured (waist), hip 1/2 in more than the pieces; size b: waist 1/8 in less. Hip in cm.
-    const text = ['Size\tWaist\tHip (cm)', `${a!.size}\t${inches(a!.garment.waist!)}\t${((a!.garment.hip! + IN / 2) / 10).toFixed(3)}`, `${b!.size}\t${inches(b!.garment.waist! - IN / 8)}\t${(b!.garment.hip! / 10).toFixed(3)}`].join('\n');
+    // Size a is written as a printed chart may write it ("Size 00"): it takes the pattern's label.
+    const text = ['Size\tWaist\tHip (cm)', `Size ${a!.size.padStart(2, '0')}\t${inches(a!.garment.waist!)}\t${((a!.garment.hip! + IN / 2) / 10).toFixed(3)}`, `${b!.size}\t${inches(b!.garment.waist! - IN / 8)}\t${(b!.garment.hip! / 10).toFixed(3)}`].join('\n');
 
     await page.goto(`${session.url}/patterns/${pattern.id}`);
     const section = page.getByRole('region', { name: 'Size table' });
@@ -224,6 +225,7 @@ describe('the pattern\'s size table', () => {
     await section.getByLabel(/^Cells from a spreadsheet/).fill(text);
     await section.getByRole('button', { name: 'Read the pasted cells' }).click();
     await section.getByText('Read 2 sizes into Waist, Hip.').waitFor();
+    await section.getByText(`Sizes named as the pattern names them: Size ${a!.size.padStart(2, '0')} → ${a!.size}.`).waitFor();
     // Leaving with unsaved cells asks first; staying keeps them.
     await page.getByRole('link', { name: 'Makes', exact: true }).click();
     const leave = page.getByRole('alertdialog', { name: 'Leave without saving the size table?' });

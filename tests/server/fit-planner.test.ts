@@ -167,6 +167,11 @@ describe("a pattern's size tables", () => {
     expect((await mina.send('delete', `/api/patterns/${libraryId}/size-chart`)).status).toBe(204);
     expect((await ada.get(`/api/patterns/${libraryId}/size-chart`)).body.printed).toBeNull();
     expect((await mina.get(`/api/patterns/${libraryId}`)).body.pattern.hasSizeChart).toBe(false);
+    // sizes written differently from the pattern's are kept under its labels; an unknown one as typed
+    const loose = await mina.send('put', `/api/patterns/${libraryId}/size-chart`, { chart: { sizes: [{ size: 'Size 08', garment: { hip: 1030 } }, { size: 'SIZE: 10', garment: { hip: 1080 } }, { size: 'XXL', garment: { hip: 1300 } }] } });
+    expect(loose.status).toBe(200);
+    expect((loose.body.printed as Chart).sizes.map((x) => x.size)).toEqual(['8', '10', 'XXL']);
+    expect(((await ada.get(`/api/patterns/${libraryId}/size-chart`)).body.printed as Chart).sizes.map((x) => [x.size, x.garment.hip])).toEqual([['8', 1030], ['10', 1080], ['XXL', 1300]]);
     expect((await mina.send('put', `/api/patterns/${libraryId}/size-chart`, { chart: demoPrintedSizeChart() })).status).toBe(200);
   });
 });

@@ -11,6 +11,7 @@ import {
   importSvg,
   parsePattern,
   type SizeChart,
+  alignChartSizes,
   chartFromPattern,
   patternSizes,
 } from '../../../geometry/index.ts';
@@ -171,19 +172,24 @@ export class PatternsService {
    */
   async sizeCharts(actor: Actor, id: string, seamAllowance: number | undefined): Promise<SizeChartsDto> {
     const { entity, pattern } = await this.loadVisible(actor, id);
+    // a table saved before sizes were matched loosely still shows the pattern's labels
+    const printed = entity.sizeChart && alignChartSizes(entity.sizeChart, patternSizes(pattern));
     try {
-      return { printed: entity.sizeChart, measured: chartFromPattern(pattern, seamAllowance !== undefined ? { seamAllowance } : {}) };
+      return { printed, measured: chartFromPattern(pattern, seamAllowance !== undefined ? { seamAllowance } : {}) };
     } catch (e) {
-      if (e instanceof FitInputError) return { printed: entity.sizeChart, measured: null, measuredError: `The pieces cannot be measured: ${e.message}.` };
+      if (e instanceof FitInputError) return { printed, measured: null, measuredError: `The pieces cannot be measured: ${e.message}.` };
       throw e;
     }
   }
 
-  /** Replace (or with null, clear) the printed size table: the owner only. */
+  /**
+   * Replace (or with null, clear) the printed size table: the owner only. Its sizes take the
+   * pattern's labels where they are written differently ("Size 08" → "8"; `alignChartSizes`).
+   */
   async setSizeChart(actor: Actor, id: string, chart: SizeChart | null): Promise<SizeChart | null> {
-    const { entity } = await this.loadVisible(actor, id);
+    const { entity, pattern } = await this.loadVisible(actor, id);
     if (entity.ownerId !== actor.id) throw forbidden('Only the owner of a pattern may change its size table.');
-    const printed = chart ? { ...chart, source: 'printed' as const } : null;
+    const printed = chart ? { ...alignChartSizes(chart, patternSizes(pattern)), source: 'printed' as const } : null;
     await this.repo.update({ id }, { sizeChart: printed });
     return printed;
   }

@@ -19,6 +19,7 @@ import {
   FIT_GIRTH_TOLERANCE,
   FIT_LENGTH_TOLERANCE,
   GARMENT_COLUMNS,
+  asPatternSize,
   cellKey,
   chartInputFromDraft,
   columnsOf,
@@ -145,6 +146,8 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
 
   const printed = charts.data?.printed ?? null;
   const measured = charts.data?.measured ?? null;
+  // typed and pasted sizes take the pattern's labels ("Size 08" → "8") so they meet its pieces
+  const patternSizes = useMemo(() => measured?.sizes.map((s) => s.size) ?? [], [measured]);
   const draft = edited ?? (printed ? draftFromChart(printed) : emptyDraft);
   const differences = useMemo(() => compareCharts(draft, measured), [draft, measured]);
   const unmatched = useMemo(() => unmatchedSizes(draft, measured), [draft, measured]);
@@ -180,7 +183,12 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
         header: 'Size',
         cell: (info) =>
           canEdit ? (
-            <SizeInput label={`Size name, row ${info.row.original.index + 1}`} value={info.getValue()} onCommit={(size) => change((d) => ({ ...d, sizes: d.sizes.map((s, i) => (i === info.row.original.index ? { ...s, size } : s)) }))} />
+            <SizeInput label={`Size name, row ${info.row.original.index + 1}`} value={info.getValue()} onCommit={(typed) =>
+                change((d) => {
+                  const size = asPatternSize(typed, patternSizes, d.sizes.filter((_, i) => i !== info.row.original.index).map((s) => s.size));
+                  return { ...d, sizes: d.sizes.map((s, i) => (i === info.row.original.index ? { ...s, size } : s)) };
+                })
+              } />
           ) : (
             <span className="font-semibold">{info.getValue()}</span>
           ),
@@ -229,7 +237,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
     ]),
     // change and setCell read only draft and kind, which are here.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [columns, kind, canEdit, units, differences, draft],
+    [columns, kind, canEdit, units, differences, draft, patternSizes],
   );
   const data = useMemo<Row[]>(() => draft.sizes.map((s, index) => ({ ...s, index })), [draft]);
   const table = useTable({ features, columns: tableColumns, data, getRowId: (row) => String(row.index) });
@@ -259,7 +267,7 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
   const measuredTable = useTable({ features, columns: measuredColumns, data: measuredData });
 
   const readPaste = () => {
-    const r = parsePastedTable(pasteText, { kind, unit: units, order: columns.map((c) => c.key) });
+    const r = parsePastedTable(pasteText, { kind, unit: units, order: columns.map((c) => c.key), sizes: patternSizes });
     setPaste(r);
     if (r.errors.length === 0) {
       change((d) => mergePasted(d, r, kind));

@@ -6,6 +6,7 @@
  * inside; text in the person's unit (or with its own unit) at the edges, read by geometry's
  * `parseLength` (`30 1/2`, `30.5in`, `77.5 cm`, `775 mm`).
  */
+import { matchSizeLabel } from '../../../../geometry/sizes.ts';
 import { type LengthUnit, LengthParseError, formatLength, parseLength } from '../../../../geometry/units.ts';
 
 /**
@@ -197,10 +198,21 @@ export interface PasteResult {
 }
 
 /**
+ * A typed size as the pattern labels it when it is written differently ("Size 08" → "8",
+ * "xl" → "XL"; geometry's `matchSizeLabel`), unless one of `others` (the table's other rows)
+ * already has that label; otherwise as typed.
+ */
+export function asPatternSize(size: string, patternSizes: readonly string[], others: readonly string[] = []): string {
+  const to = matchSizeLabel(size, patternSizes);
+  return to !== undefined && !others.includes(to) ? to : size;
+}
+
+/**
  * Read cells pasted from a spreadsheet into rows of one chart (garment or body).
  *
  * - rows are lines, cells are separated by tabs (or by two or more spaces when there is no tab);
- * - the first cell of each row is the size;
+ * - the first cell of each row is the size, named as the pattern names it when `sizes` (the
+ *   pattern's) has it written differently (`asPatternSize`; a note lists what was renamed);
  * - the first row is read as headings when none of its cells after the first is a length; each
  *   heading must name a column (`Hip`, `Front rise`, `Waist girth`, `Inseam (cm)`); a unit in the
  *   heading applies to the cells under it that have none; a column with an unknown heading is
@@ -209,7 +221,7 @@ export interface PasteResult {
  * - a cell is a positive length in `unit` unless it names its own (`30 1/2`, `30½`, `77.5 cm`);
  *   an empty cell or a dash is no value.
  */
-export function parsePastedTable(text: string, options: { kind: ChartKind; unit: LengthUnit; order?: readonly string[] }): PasteResult {
+export function parsePastedTable(text: string, options: { kind: ChartKind; unit: LengthUnit; order?: readonly string[]; sizes?: readonly string[] }): PasteResult {
   const rows = splitRows(text);
   const errors: string[] = [];
   const notes: string[] = [];
@@ -245,9 +257,12 @@ export function parsePastedTable(text: string, options: { kind: ChartKind; unit:
 
   const out: PastedRow[] = [];
   const seen = new Set<string>();
+  const relabelled: string[] = [];
   rows.slice(header ? 1 : 0).forEach((cells, i) => {
     const line = i + (header ? 2 : 1);
-    const size = (cells[0] ?? '').trim();
+    const typed = (cells[0] ?? '').trim();
+    const size = asPatternSize(typed, options.sizes ?? []);
+    if (size !== typed) relabelled.push(`${typed} → ${size}`);
     if (size === '') {
       errors.push(`Line ${line}: the first cell must be the size.`);
       return;
@@ -267,6 +282,7 @@ export function parsePastedTable(text: string, options: { kind: ChartKind; unit:
     out.push({ size, values });
   });
   if (out.length === 0 && errors.length === 0) errors.push('Only headings were pasted: paste the rows of sizes too.');
+  if (relabelled.length > 0) notes.push(`Sizes named as the pattern names them: ${relabelled.join(', ')}.`);
   return { columns: targets.filter((t) => t !== undefined).map((t) => t.column), rows: out, header, errors, notes };
 }
 
