@@ -156,3 +156,26 @@ describe('no 500 from the alteration engine', () => {
     expect(seen.has(422)).toBe(true);
   });
 });
+
+describe('no 500 on any query string', () => {
+  // Every route that reads its query; the keys it knows, others, repeats (read as arrays) and
+  // bracketed keys, with any text as values.
+  const listRoutes = ['/api/patterns', '/api/prints', '/api/makes', '/api/patterns/:patternId/size-chart'];
+  const key = fc.oneof(fc.constantFrom('scope', 'makeId', 'archived', 'seamAllowance', 'toString', '__proto__', 'scope[toString]', 'makeId[]'), fc.string({ maxLength: 6 }));
+  const value = fc.oneof(fc.constantFrom('', 'mine', 'library', 'true', '1e309', '-1', '$makeId', 'NaN'), fc.string({ maxLength: 12 }));
+  const query = fc.array(fc.tuple(key, value), { maxLength: 5 });
+  for (const path of listRoutes) {
+    it(`when GET ${path} gets any query, then it answers 2xx or 4xx`, async () => {
+      const url = path.replace(/:(\w+)/g, (_, k: string) => ids[k]!);
+      await fc.assert(
+        fc.asyncProperty(query, async (pairs) => {
+          const qs = pairs.map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v.startsWith('$') && ids[v.slice(1)] ? ids[v.slice(1)]! : v)}`).join('&');
+          const res = await admin.get(`${url}?${qs}`);
+          expect(res.status).toBeLessThan(500);
+          if (res.status >= 400) expect(typeof res.body.error?.code).toBe('string');
+        }),
+        { numRuns: 40 },
+      );
+    });
+  }
+});
