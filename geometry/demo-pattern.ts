@@ -8,6 +8,7 @@
  * side seam on the left (x < 0), centre front/back and crotch on the right (x > 0).
  */
 import { type Edge, type Landmark, type Outline, type Pattern, type PatternLine, type Piece, BODY_LEVELS, PATTERN_VERSION } from './model.ts';
+import { type Cubic, cubicLength } from './bezier.ts';
 import type { Point } from './vec.ts';
 
 /** The demo sizes, smallest to largest. */
@@ -50,20 +51,61 @@ const hline = (y: number, x0: number, x1: number): string => `M${r2(x0)} ${r2(y)
 
 interface LegSpec {
   readonly back: boolean;
+  /** How far the crotch point sits below the grade table's crotch level (mm). */
+  readonly crotchDrop: number;
 }
 
-/** One size of a front or back leg piece. */
-function legOutline(i: number, spec: LegSpec): { outline: Outline; levels: Record<string, number>; halfWidth: number } {
+/** The points of one size of a leg piece that its inseam depends on. */
+function inseamFrame(i: number, spec: LegSpec) {
   const g = demoGrade(i);
   const quarterHip = g.hip / 4 + (spec.back ? 12 : -12);
-  const quarterWaist = g.waist / 4 + (spec.back ? 8 : -8);
   const kneeHalf = g.knee / 4 + (spec.back ? 12 : -12);
   const hemHalf = g.hem / 4 + (spec.back ? 12 : -12);
   const ext = spec.back ? g.hip / 9 : g.hip / 16; // crotch extension
   const yHip = g.hipDepth;
-  const yCrotch = g.rise + (spec.back ? 8 : 0);
+  const yCrotch = g.rise + spec.crotchDrop;
   const yKnee = g.rise + 340;
   const yHem = g.rise + g.inseam;
+  // the centre seam turns into the crotch curve halfway from the hip to the crotch level (the
+  // back's 8 mm lower), wherever the crotch point itself is dropped: the yoke meets it there
+  const curveStartY = yHip + 0.5 * (g.rise + (spec.back ? 8 : 0) - yHip);
+  const centreCurveStart: Point = { x: 0.55 * quarterHip, y: curveStartY };
+  const crotch: Point = { x: centreCurveStart.x + ext, y: yCrotch };
+  const kneeIn: Point = { x: kneeHalf, y: yKnee };
+  const hemIn: Point = { x: hemHalf, y: yHem };
+  // inseam: concave curve from the crotch point to the knee, then straight to the hem
+  const inseamCurve: Cubic = [crotch, { x: crotch.x - 0.35 * (crotch.x - kneeIn.x), y: crotch.y + 0.12 * (yKnee - yCrotch) }, lerp(kneeIn, hemIn, (-0.35 * (yKnee - yCrotch)) / (yHem - yKnee)), kneeIn];
+  return { g, quarterHip, kneeHalf, hemHalf, ext, yHip, yCrotch, yKnee, yHem, curveStartY, centreCurveStart, crotch, kneeIn, hemIn, inseamCurve };
+}
+
+/** Inseam length (crotch point to hem) of one size of a leg piece. */
+const inseamLength = (i: number, spec: LegSpec): number => {
+  const f = inseamFrame(i, spec);
+  return cubicLength(f.inseamCurve) + Math.hypot(f.hemIn.x - f.kneeIn.x, f.hemIn.y - f.kneeIn.y);
+};
+
+/**
+ * The back crotch point's drop below the front's: whatever makes the back inseam as long as the
+ * front's (trade reference §3.11: front and back inseams, crotch point to hem, must be equal;
+ * lowering the back crotch point to true them: common practice, no source). Found by
+ * bisection: the back inseam shortens as the drop grows. 12–30 mm over the demo sizes.
+ */
+function backCrotchDrop(i: number): number {
+  const target = inseamLength(i, { back: false, crotchDrop: 0 });
+  let lo = 0;
+  let hi = 80;
+  for (let k = 0; k < 40; k++) {
+    const mid = (lo + hi) / 2;
+    if (inseamLength(i, { back: true, crotchDrop: mid }) > target) lo = mid;
+    else hi = mid;
+  }
+  return (lo + hi) / 2;
+}
+
+/** One size of a front or back leg piece. */
+function legOutline(i: number, spec: LegSpec): { outline: Outline; levels: Record<string, number>; halfWidth: number } {
+  const { g, quarterHip, kneeHalf, hemHalf, ext, yHip, yCrotch, yKnee, yHem, curveStartY, centreCurveStart, crotch, kneeIn, hemIn, inseamCurve } = inseamFrame(i, spec);
+  const quarterWaist = g.waist / 4 + (spec.back ? 8 : -8);
   // The top edge: front = waist; back = yoke seam (35 mm below the waist at the side, 45 mm at CB).
   const topSide = spec.back ? 35 : 0;
   const topCentre = spec.back ? 45 : 8;
@@ -71,12 +113,7 @@ function legOutline(i: number, spec: LegSpec): { outline: Outline; levels: Recor
   const sideHip: Point = { x: -0.45 * quarterHip, y: yHip };
   const sideWaist: Point = { x: -0.45 * quarterWaist, y: 0 };
   const sideTop = spec.back ? lerp(sideWaist, sideHip, topSide / yHip) : sideWaist;
-  const curveStartY = yHip + 0.5 * (yCrotch - yHip);
-  const centreCurveStart: Point = { x: 0.55 * quarterHip, y: curveStartY };
   const centreTop: Point = { x: centreCurveStart.x - centreLean * (curveStartY - topCentre), y: topCentre };
-  const crotch: Point = { x: centreCurveStart.x + ext, y: yCrotch };
-  const kneeIn: Point = { x: kneeHalf, y: yKnee };
-  const hemIn: Point = { x: hemHalf, y: yHem };
   const hemSide: Point = { x: -hemHalf, y: yHem };
   const kneeSide: Point = { x: -kneeHalf, y: yKnee };
   const curveDepth = yCrotch - curveStartY;
@@ -88,8 +125,7 @@ function legOutline(i: number, spec: LegSpec): { outline: Outline; levels: Recor
     `L${P(centreCurveStart)}`,
     // crotch curve: leaves the centre seam along its lean, arrives at the crotch point horizontally
     `C${P({ x: centreCurveStart.x + centreLean * 0.55 * curveDepth, y: centreCurveStart.y + 0.55 * curveDepth })} ${P({ x: crotch.x - 0.55 * ext, y: crotch.y })} ${P(crotch)}`,
-    // inseam: concave curve from the crotch point to the knee, then straight to the hem
-    `C${P({ x: crotch.x - 0.35 * (crotch.x - kneeIn.x), y: crotch.y + 0.12 * (yKnee - yCrotch) })} ${P(lerp(kneeIn, hemIn, (-0.35 * (yKnee - yCrotch)) / (yHem - yKnee)))} ${P(kneeIn)}`,
+    `C${P(inseamCurve[1])} ${P(inseamCurve[2])} ${P(kneeIn)}`,
     `L${P(hemIn)}`,
     `L${P(hemSide)}`,
     `L${P(kneeSide)}`,
@@ -119,7 +155,7 @@ function legPiece(back: boolean): Piece {
   const outlines: Outline[] = [];
   const lines: PatternLine[] = [];
   for (let i = 0; i < DEMO_SIZES.length; i++) {
-    const { outline, levels, halfWidth } = legOutline(i, { back });
+    const { outline, levels, halfWidth } = legOutline(i, { back, crotchDrop: back ? backCrotchDrop(i) : 0 });
     outlines.push(outline);
     const size = DEMO_SIZES[i]!;
     const x0 = -halfWidth;
@@ -131,8 +167,8 @@ function legPiece(back: boolean): Piece {
     lines.push({ role: 'lengthen', name: 'upper leg', d: hline((levels.crotch! + levels.knee!) / 2, x0, x1), size });
     lines.push({ role: 'lengthen', name: 'lower leg', d: hline((levels.knee! + levels.hem!) / 2, x0, x1), size });
   }
-  const first = legOutline(0, { back });
-  const last = legOutline(DEMO_SIZES.length - 1, { back });
+  const first = legOutline(0, { back, crotchDrop: 0 });
+  const last = legOutline(DEMO_SIZES.length - 1, { back, crotchDrop: 0 });
   lines.push({ role: 'grain', name: 'grain', d: `M0 ${r2(first.levels.hip! - 60)} L0 ${r2(last.levels.hem! - 60)}` });
   const c = back ? 'cb' : 'cf';
   const edges: Edge[] = [

@@ -106,20 +106,38 @@ export function widthAtLevel(piece: Piece, size: string, level: string): number 
   return widthAlongLine(outline, a, vecSub(b, a));
 }
 
+/** One side of a paired seam: the pieces sewn into it, end to end, and their summed length. */
+export interface SeamSide {
+  /** The pieces' names joined with " + " ("back + yoke"). */
+  readonly piece: string;
+  /** The named piece first, then the pieces that continue its seam. */
+  readonly pieces: readonly string[];
+  readonly length: number;
+}
+
 export interface PairedSeam {
   readonly size: string;
   readonly role: EdgeRole;
-  readonly first: { readonly piece: string; readonly length: number };
-  readonly second: { readonly piece: string; readonly length: number };
+  readonly first: SeamSide;
+  readonly second: SeamSide;
   /** first − second (mm). */
   readonly difference: number;
   readonly withinTolerance: boolean;
 }
 
+/** Which side of the body a piece lies on, by its centre seam. */
+const bodySide = (piece: Piece): 'front' | 'back' | undefined =>
+  piece.edges.some((e) => e.role === 'centre-back') ? 'back' : piece.edges.some((e) => e.role === 'centre-front') ? 'front' : undefined;
+
 /**
  * Compare the seams that are sewn together: for each size the two pieces share, the edges
  * with each role (default inseam and side seam). `tolerance` defaults to
  * PAIRED_SEAM_TOLERANCE (trade reference §3.11, common practice).
+ *
+ * A seam is measured whole (§3.11: "front and back outseams, waist to hem"): a side takes, with
+ * its named piece, every other piece on the same side of the body (by its centre-front or
+ * centre-back edge) that has an edge of that role in that size — a back yoke's side seam is
+ * added to the back's, as the two are sewn end to end before the side seam is closed.
  */
 export function pairedSeamReport(
   pattern: Pattern,
@@ -130,14 +148,33 @@ export function pairedSeamReport(
   if (!first || !second) throw new MeasureError(`paired-seam report needs pieces "${options.first ?? 'front'}" and "${options.second ?? 'back'}"`);
   const roles = options.roles ?? (['inseam', 'side-seam'] as const);
   const tol = options.tolerance ?? PAIRED_SEAM_TOLERANCE;
+  const others = pattern.pieces.filter((p) => p !== first && p !== second);
+  const sideOf = (named: Piece, size: string, role: EdgeRole): SeamSide | undefined => {
+    const own = edgeLength(named, size, role);
+    if (own === undefined) return undefined;
+    const side = bodySide(named);
+    const pieces = [named.name];
+    let length = own;
+    if (side !== undefined && bodySide(first) !== bodySide(second)) {
+      for (const p of others) {
+        if (bodySide(p) !== side || !p.outlines.some((o) => o.size === size)) continue;
+        const more = edgeLength(p, size, role);
+        if (more === undefined) continue;
+        pieces.push(p.name);
+        length += more;
+      }
+    }
+    return { piece: pieces.join(' + '), pieces, length };
+  };
   const out: PairedSeam[] = [];
   for (const o of first.outlines) {
     if (!second.outlines.some((q) => q.size === o.size)) continue;
     for (const role of roles) {
-      const a = edgeLength(first, o.size, role);
-      const b = edgeLength(second, o.size, role);
+      const a = sideOf(first, o.size, role);
+      const b = sideOf(second, o.size, role);
       if (a === undefined || b === undefined) continue;
-      out.push({ size: o.size, role, first: { piece: first.name, length: a }, second: { piece: second.name, length: b }, difference: a - b, withinTolerance: Math.abs(a - b) <= tol });
+      const difference = a.length - b.length;
+      out.push({ size: o.size, role, first: a, second: b, difference, withinTolerance: Math.abs(difference) <= tol });
     }
   }
   return out;

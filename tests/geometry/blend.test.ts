@@ -9,6 +9,7 @@ import {
   demoPattern,
   edgeLength,
   outlineContour,
+  pairedSeamReport,
   parsePattern,
   pathFromSvg,
   performBlend,
@@ -99,8 +100,13 @@ describe('blend — follows each chosen size at its level', () => {
   it('front and back blended with the same levels still have matching seams, as the sizes did (trade reference §3.9)', () => {
     const size = piece(out, 'front').outlines[0]!.size;
     const d = (p: Pattern, s: string, role: string) => edgeLength(piece(p, 'front'), s, role)! - edgeLength(piece(p, 'back'), s, role)!;
-    // the demo sizes' own front/back inseam difference (same for every size by construction)
-    expectNear(d(out, size, 'inseam'), d(demo, '8', 'inseam'), 1.5);
+    // the demo's sizes are trued (equal inseams in every size), and so is the blend, within 1.5 mm
+    for (const s of DEMO_SIZES) expectNear(d(demo, s, 'inseam'), 0, 0.01, `size ${s}`);
+    expectNear(d(out, size, 'inseam'), 0, 1.5);
+    // the side seam measured whole (the back's with the yoke's) matches within the tolerance
+    const side = pairedSeamReport(out).find((r) => r.role === 'side-seam')!;
+    expect(side.second.pieces).toEqual(['back', 'yoke']);
+    expect(side.withinTolerance).toBe(true);
   });
 });
 

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   DEMO_SIZES,
   PatternError,
+  type Piece,
   contourArea,
   contourIsSimple,
   crotchLength,
@@ -116,6 +117,28 @@ describe('measurements', () => {
     expectNear(widthAtLevel(rect.pieces[0]!, '10', 'knee'), 200, 1e-9);
   });
 
+  it('paired-seam report: a piece on the same side as the back (by its centre-back edge) adds its side seam; others do not', () => {
+    const leg = rect.pieces[0]!;
+    const withCentre = (p: Piece, name: string, role: 'centre-front' | 'centre-back'): Piece => ({ ...p, name, edges: [...p.edges, { name: role, role, from: p.edges[0]!.from, to: p.edges[0]!.to }] });
+    const front = withCentre(leg, 'front', 'centre-front');
+    const back = withCentre(leg, 'back', 'centre-back');
+    const yoke = withCentre(leg, 'yoke', 'centre-back');
+    const sideless = { ...leg, name: 'facing' };
+    const r = pairedSeamReport(patternOf(front, back, yoke, sideless)).find((x) => x.role === 'side-seam')!;
+    expect(r.first.pieces).toEqual(['front']);
+    expect(r.second.pieces).toEqual(['back', 'yoke']);
+    expectNear(r.difference, -800, 1e-9);
+    expect(r.withinTolerance).toBe(false);
+    // a front piece (centre front) joins the front's side instead, and then they match again
+    const frontYoke = withCentre(leg, 'front yoke', 'centre-front');
+    const even = pairedSeamReport(patternOf(front, back, yoke, frontYoke)).find((x) => x.role === 'side-seam')!;
+    expect(even.first.pieces).toEqual(['front', 'front yoke']);
+    expectNear(even.difference, 0, 1e-9);
+    // two pieces of the same side compared with each other: each alone
+    const same = pairedSeamReport(patternOf(back, yoke, withCentre(leg, 'back 2', 'centre-back')), { first: 'back', second: 'back 2' }).find((x) => x.role === 'side-seam')!;
+    expect([same.first.pieces, same.second.pieces]).toEqual([['back'], ['back 2']]);
+  });
+
   it('paired-seam report: equal seams match; a 5 mm difference is outside the 2 mm tolerance (trade reference §3.11, common practice)', () => {
     const back = { ...rect.pieces[0]!, name: 'back' };
     const p = patternOf(rect.pieces[0]!, back);
@@ -132,14 +155,22 @@ describe('measurements', () => {
     }
   });
 
-  it('the demo front and back: inseams and side seams compared per size, and crotch length = front + back', () => {
+  it('the demo front and back: inseams and whole side seams (back + yoke) compared per size, all trued; crotch length = front + back', () => {
     const demo = parsePattern(demoPattern());
+    const [front, back, yoke] = demo.pieces as [Piece, Piece, Piece];
     const report = pairedSeamReport(demo);
     expect(report).toHaveLength(22);
-    for (const r of report) expectNear(r.difference, edgeLength(demo.pieces[0]!, r.size, r.role)! - edgeLength(demo.pieces[1]!, r.size, r.role)!, 1e-9);
+    for (const r of report) {
+      const f = edgeLength(front, r.size, r.role)!;
+      const b = edgeLength(back, r.size, r.role)! + (r.role === 'side-seam' ? edgeLength(yoke, r.size, r.role)! : 0);
+      expect(r.second.pieces).toEqual(r.role === 'side-seam' ? ['back', 'yoke'] : ['back']);
+      expect(r.second.piece).toBe(r.second.pieces.join(' + '));
+      expectNear(r.difference, f - b, 1e-9);
+      // front and back outseams (waist to hem) and inseams must be equal (trade reference §3.11): the demo is trued
+      expect(r.withinTolerance, `${r.size} ${r.role}`).toBe(true);
+    }
     const c = crotchLength(demo).find((x) => x.size === '10')!;
-    const front = edgeLength(demo.pieces[0]!, '10', 'centre-front')! + edgeLength(demo.pieces[0]!, '10', 'crotch-curve')!;
-    expectNear(c.front, front, 1e-9);
+    expectNear(c.front, edgeLength(front, '10', 'centre-front')! + edgeLength(front, '10', 'crotch-curve')!, 1e-9);
     expectNear(c.total, c.front + c.back, 1e-9);
     expect(c.back).toBeGreaterThan(c.front);
   });

@@ -59,7 +59,7 @@ export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, 
               role={p.withinTolerance ? undefined : 'alert'}
               className={cx('rounded-md px-2 py-1 text-sm', p.withinTolerance ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}
             >
-              {EDGE_LABELS[p.role]}: front {formatLength(p.first.length, unit)}, back {formatLength(p.second.length, unit)} —{' '}
+              {EDGE_LABELS[p.role]}: {p.first.piece} {formatLength(p.first.length, unit)}, {p.second.piece} {formatLength(p.second.length, unit)} —{' '}
               {p.withinTolerance
                 ? `within ${formatLength(PAIRED_SEAM_TOLERANCE, unit)}`
                 : `differ by ${formatLength(Math.abs(p.difference), unit)}: true the seams before cutting (more than ${formatLength(PAIRED_SEAM_TOLERANCE, unit)})`}
