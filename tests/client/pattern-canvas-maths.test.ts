@@ -23,6 +23,7 @@ import {
   centredTransform,
   constrainAlong,
   fitTransform,
+  labelLines,
   panBy,
   pieceToWorld,
   screenToWorld,
@@ -314,5 +315,26 @@ describe('calibration', () => {
     const storage = memoryStorage();
     expect(() => saveCalibration(storage, 0.2)).toThrow(RangeError);
     expect(storage.map.size).toBe(0);
+  });
+});
+
+describe('a piece label on two lines', () => {
+  it('splits at the space nearest the middle, and not at all without a space', () => {
+    expect(labelLines('front pocket bag')).toEqual(['front', 'pocket bag']);
+    expect(labelLines('back pocket')).toEqual(['back', 'pocket']);
+    expect(labelLines('waistband')).toBeUndefined();
+  });
+
+  it('keeps every word in order and shortens the longest line to no more than the whole (property)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.stringMatching(/^[a-z]{1,9}$/), { minLength: 2, maxLength: 6 }), (words) => {
+        const text = words.join(' ');
+        const [a, b] = labelLines(text)!;
+        expect(`${a} ${b}`).toBe(text);
+        expect(Math.max(a.length, b.length)).toBeLessThan(text.length);
+        // no other space gives a shorter longest line
+        for (let i = text.indexOf(' '); i !== -1; i = text.indexOf(' ', i + 1)) expect(Math.max(a.length, b.length)).toBeLessThanOrEqual(Math.max(i, text.length - i - 1));
+      }),
+    );
   });
 });

@@ -27,7 +27,7 @@ import {
 import { layoutPieces, type CanvasLayout } from './layout.ts';
 import { ReferenceDrawing } from './reference-drawing.ts';
 import { overlayStructure, pieceShapeChanged, pieceStructure, sameLayout } from './scene-diff.ts';
-import type { ViewTransform } from './view-math.ts';
+import { type ViewTransform, labelLines } from './view-math.ts';
 
 type Scope = paper.PaperScope;
 type Item = paper.Item;
@@ -70,6 +70,8 @@ export type CanvasHighlight = { piece: string; edge?: string; line?: string };
 
 /** Screen sizes (CSS px), kept constant while zooming. */
 const LABEL_PX = { piece: 14, line: 10, point: 11 };
+/** A piece's name shrinks to fit its piece down to this (CSS px). */
+const LABEL_MIN_PX = 9;
 const DOT_PX = 2.5;
 const POINT_PX = 3.5;
 export const HANDLE_PX = 7;
@@ -471,9 +473,25 @@ export class PatternScene {
     const b = this.layout.placements.get(piece.name)?.bounds;
     const first = items.outlines[0];
     const fb = first ? first.path.bounds : undefined;
-    setFontSize(items.label, mm(LABEL_PX.piece));
-    if (fb) setPoint(items.label, fb.center.x, fb.center.y);
-    else if (b) setPoint(items.label, (b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
+    // the piece's name over its middle; wider than the piece, it takes two lines, then a smaller
+    // size (not below LABEL_MIN_PX), so a small piece's name does not run over its neighbour
+    const label = items.label;
+    const full = mm(LABEL_PX.piece);
+    setFontSize(label, full);
+    if (label.content !== piece.name) label.content = piece.name;
+    const room = fb ? fb.width * 0.9 : Infinity;
+    if (label.bounds.width > room) {
+      const lines = labelLines(piece.name);
+      if (lines) label.content = lines.join('\n');
+      const wide = label.bounds.width;
+      if (wide > room) setFontSize(label, Math.max(mm(LABEL_MIN_PX), (full * room) / wide));
+    }
+    // the point is the first line's baseline: lift by half a second line (line spacing 1.2 × size)
+    const leading = Number(label.fontSize) * 1.2;
+    if (label.leading !== leading) label.leading = leading;
+    const lift = label.content.includes('\n') ? leading / 2 : 0;
+    if (fb) setPoint(label, fb.center.x, fb.center.y - lift);
+    else if (b) setPoint(label, (b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2 - lift);
   }
 
   private applyScreenSizes(): void {

@@ -89,3 +89,14 @@ export function constrainAlong(origin: Point, axis: Point | undefined, p: Point)
   const k = (p.x - origin.x) * ux + (p.y - origin.y) * uy;
   return { x: origin.x + k * ux, y: origin.y + k * uy };
 }
+
+/**
+ * A label on two lines, split at the space nearest its middle ("front pocket bag" → "front",
+ * "pocket bag"); undefined when it has no space to split at.
+ */
+export function labelLines(text: string): [string, string] | undefined {
+  const middle = text.length / 2;
+  let best = -1;
+  for (let i = text.indexOf(' '); i !== -1; i = text.indexOf(' ', i + 1)) if (best === -1 || Math.abs(i - middle) < Math.abs(best - middle)) best = i;
+  return best === -1 ? undefined : [text.slice(0, best).trimEnd(), text.slice(best + 1).trimStart()];
+}
