@@ -4,7 +4,7 @@
  * included in the outline).
  */
 import { type Edge, type EdgeRole, type Outline, type Pattern, type Piece, landmarkOf, outlineContour } from './model.ts';
-import { type Contour, contourArea, contourFlatten, contourLength, contourLineIntersections, contourNearest, contourStretch, pathFromSvg } from './path.ts';
+import { type Contour, contourArea, contourFlatten, contourLength, contourLineIntersections, contourNearest, contourOffsetOf, contourStretch, pathFromSvg } from './path.ts';
 import { PAIRED_SEAM_TOLERANCE } from './tolerance.ts';
 import { type Point, vecDistance, vecDot, vecNormalize, vecSub } from './vec.ts';
 
@@ -106,6 +106,13 @@ export function widthAtLevel(piece: Piece, size: string, level: string): number 
   return widthAlongLine(outline, a, vecSub(b, a));
 }
 
+/** A notch on a seam: its landmark and its distance along the seam from the hem (mm). */
+export interface SeamNotch {
+  readonly piece: string;
+  readonly name: string;
+  readonly fromHem: number;
+}
+
 /** One side of a paired seam: the pieces sewn into it, end to end, and their summed length. */
 export interface SeamSide {
   /** The pieces' names joined with " + " ("back + yoke"). */
@@ -113,6 +120,17 @@ export interface SeamSide {
   /** The named piece first, then the pieces that continue its seam. */
   readonly pieces: readonly string[];
   readonly length: number;
+  /** The notches on the seam, nearest the hem first; undefined when the named piece has no hem edge to measure from. */
+  readonly notches?: readonly SeamNotch[];
+}
+
+/** The k-th notch from the hem on each side, where both sides have one. */
+export interface NotchPair {
+  readonly first: SeamNotch;
+  readonly second: SeamNotch;
+  /** first.fromHem − second.fromHem (mm). */
+  readonly difference: number;
+  readonly withinTolerance: boolean;
 }
 
 export interface PairedSeam {
@@ -123,6 +141,38 @@ export interface PairedSeam {
   /** first − second (mm). */
   readonly difference: number;
   readonly withinTolerance: boolean;
+  /** The notches matched in order from the hem; a side with more notches than the other leaves the rest unmatched. Empty when a side cannot be measured from the hem. */
+  readonly notches: readonly NotchPair[];
+  /** Both sides have as many notches and every pair is within the tolerance (true when a side cannot be measured from the hem: nothing to compare). */
+  readonly notchesMatch: boolean;
+}
+
+/** A landmark counts as on a seam within this distance of it (mm): landmarks are stored to 0.001 mm. */
+const ON_SEAM = 0.05;
+
+/**
+ * The notches on one piece's edge with this role, with their distance along it from `from`:
+ * the end of the edge it shares with an edge of role `fromRole`. Undefined when the piece has
+ * no such edge or they share no end.
+ */
+function edgeNotches(piece: Piece, size: string, role: EdgeRole, fromRole: EdgeRole): { length: number; notches: { name: string; at: number }[] } | undefined {
+  const edge = piece.edges.find((e) => e.role === role);
+  const other = piece.edges.find((e) => e.role === fromRole);
+  const outline = piece.outlines.find((o) => o.size === size);
+  if (!edge || !other || !outline) return undefined;
+  const start = [other.from, other.to].includes(edge.from) ? 'from' : [other.from, other.to].includes(edge.to) ? 'to' : undefined;
+  if (!start) return undefined;
+  const stretch = edgeContour(outline, edge);
+  const length = contourLength(stretch);
+  const notches: { name: string; at: number }[] = [];
+  for (const lm of outline.points) {
+    if (lm.kind !== 'notch') continue;
+    const near = contourNearest(stretch, lm);
+    if (near.distance > ON_SEAM) continue;
+    const along = contourOffsetOf(stretch, near);
+    notches.push({ name: lm.name, at: start === 'from' ? along : length - along });
+  }
+  return { length, notches: notches.sort((a, b) => a.at - b.at) };
 }
 
 /** Which side of the body a piece lies on, by its centre seam. */
@@ -138,6 +188,12 @@ const bodySide = (piece: Piece): 'front' | 'back' | undefined =>
  * its named piece, every other piece on the same side of the body (by its centre-front or
  * centre-back edge) that has an edge of that role in that size — a back yoke's side seam is
  * added to the back's, as the two are sewn end to end before the side seam is closed.
+ *
+ * Notches are walked too (§3.11: notches match within about 2–3 mm): on each side, the notch
+ * landmarks lying on the seam, by their distance along it from the hem (the end the named
+ * piece's seam shares with its hem edge; a continuing piece's from its end away from its waist
+ * edge, after the named piece's seam). The k-th from the hem on one side is paired with the k-th
+ * on the other; `tolerance` applies to each pair.
  */
 export function pairedSeamReport(
   pattern: Pattern,
@@ -155,16 +211,21 @@ export function pairedSeamReport(
     const side = bodySide(named);
     const pieces = [named.name];
     let length = own;
+    // notches from the hem up: the named piece's, then a continuing piece's from its end away from the waist
+    const fromHem = edgeNotches(named, size, role, 'hem');
+    const notches: SeamNotch[] | undefined = fromHem?.notches.map((n) => ({ piece: named.name, name: n.name, fromHem: n.at }));
     if (side !== undefined && bodySide(first) !== bodySide(second)) {
       for (const p of others) {
         if (bodySide(p) !== side || !p.outlines.some((o) => o.size === size)) continue;
         const more = edgeLength(p, size, role);
         if (more === undefined) continue;
+        const fromWaist = notches && edgeNotches(p, size, role, 'waist');
+        if (fromWaist) for (const n of fromWaist.notches) notches!.push({ piece: p.name, name: n.name, fromHem: length + fromWaist.length - n.at });
         pieces.push(p.name);
         length += more;
       }
     }
-    return { piece: pieces.join(' + '), pieces, length };
+    return { piece: pieces.join(' + '), pieces, length, ...(notches ? { notches: notches.sort((a, b) => a.fromHem - b.fromHem) } : {}) };
   };
   const out: PairedSeam[] = [];
   for (const o of first.outlines) {
@@ -174,7 +235,16 @@ export function pairedSeamReport(
       const b = sideOf(second, o.size, role);
       if (a === undefined || b === undefined) continue;
       const difference = a.length - b.length;
-      out.push({ size: o.size, role, first: a, second: b, difference, withinTolerance: Math.abs(difference) <= tol });
+      const an = a.notches ?? [];
+      const bn = b.notches ?? [];
+      const measurable = a.notches !== undefined && b.notches !== undefined;
+      const notches: NotchPair[] = [];
+      for (let k = 0; measurable && k < Math.min(an.length, bn.length); k++) {
+        const d = an[k]!.fromHem - bn[k]!.fromHem;
+        notches.push({ first: an[k]!, second: bn[k]!, difference: d, withinTolerance: Math.abs(d) <= tol });
+      }
+      const notchesMatch = !measurable || (an.length === bn.length && notches.every((n) => n.withinTolerance));
+      out.push({ size: o.size, role, first: a, second: b, difference, withinTolerance: Math.abs(difference) <= tol, notches, notchesMatch });
     }
   }
   return out;

@@ -1,10 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { type AlterationEntry, applyOps, demoPattern, replayAlterations } from '../../geometry/index.ts';
+import { type AlterationEntry, type PairedSeam, applyOps, demoPattern, formatLength, replayAlterations } from '../../geometry/index.ts';
 import { describeIntent, describeOp, inUnits } from '../../src/features/workspace/model/describe.ts';
 import { amountAt, amountHandle, handlePoint } from '../../src/features/workspace/model/handles.ts';
 import { applyIntent, type Intent, invertIntent, newEntryId } from '../../src/features/workspace/model/intents.ts';
-import { measureRows, pairedSeams } from '../../src/features/workspace/model/measurements.ts';
+import { measureRows, notchWords, pairedSeams } from '../../src/features/workspace/model/measurements.ts';
 import { prefixFor, previewWith, replaySafely } from '../../src/features/workspace/model/replay.ts';
 import { acceptPlan } from '../../src/features/workspace/model/plan.ts';
 import { BLEND } from '../bench/alterations.ts';
@@ -142,6 +142,20 @@ describe('replay in the browser and the drag preview', () => {
       expect(row(`${piece}:crotch-curve`).now).toBeCloseTo(row(`${piece}:crotch-curve`).before!, 6);
     }
     expect(pairedSeams(now, undefined).map((p) => p.role).sort()).toEqual(['inseam', 'side-seam']);
+  });
+
+  it('the notches of a paired seam in words: meeting, apart (in the person\'s unit), or missing on one side', () => {
+    const side = pairedSeams(demo, '10').find((p) => p.role === 'side-seam')!;
+    expect(notchWords(side, 'in')).toBe('both notches meet within 1/16 in');
+    expect(notchWords(pairedSeams(demo, '10').find((p) => p.role === 'inseam')!, 'cm')).toBe('the notch meets within 0.2 cm');
+    // the back's hip notch 1/4 in (6.35 mm) higher: apart; then a notch fewer on the back
+    const [knee, hip] = side.notches as [PairedSeam['notches'][number], PairedSeam['notches'][number]];
+    const apart = { ...hip, second: { ...hip.second, fromHem: hip.second.fromHem + 6.35 }, difference: hip.difference - 6.35, withinTolerance: false };
+    const moved = { ...side, notches: [knee, apart], notchesMatch: false };
+    expect(notchWords(moved, 'in')).toBe(`notch hip-side is ${formatLength(hip.first.fromHem, 'in')} from the hem on the front, ${formatLength(hip.second.fromHem + 6.35, 'in')} on the back + yoke: ${formatLength(Math.abs(hip.difference - 6.35), 'in')} apart`);
+    const fewer = { ...side, second: { ...side.second, notches: side.second.notches!.slice(0, 1) }, notches: [knee], notchesMatch: false };
+    expect(notchWords(fewer, 'in')).toBe('the front has 2 notches here, the back + yoke 1');
+    expect(notchWords({ ...side, first: { ...side.first, notches: [] }, second: { ...side.second, notches: [] }, notches: [] }, 'in')).toBeUndefined();
   });
 });
 

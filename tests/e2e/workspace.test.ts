@@ -25,6 +25,13 @@ describe('the seeded make', () => {
     const list = session.page.getByRole('list', { name: 'Alterations' });
     expect(await list.getByRole('listitem').count()).toBe(3);
     await session.page.getByRole('table', { name: 'Seam lengths' }).waitFor();
+    // the seeded make (blend, shorten, rise) on the trued demo: front and back meet, seams and notches
+    const paired = session.page.getByLabel('Paired seams');
+    expect(await paired.getByRole('alert').count()).toBe(0);
+    const text = await paired.innerText();
+    expect(text).toMatch(/Side seam: front [^,]+, back \+ yoke .+ within 1\/16 in/);
+    expect(text).toContain('both notches meet within 1/16 in');
+    expect(text).toContain('the notch meets within 1/16 in');
     await session.page.screenshot({ path: `${shots}/workspace-seeded.png` });
     expect(errors).toEqual([]);
   });

@@ -144,6 +144,11 @@ describe('lengthen and rise on the demo pattern — trade facts', () => {
     const before = pairedSeamReport(demo);
     const after = pairedSeamReport(out);
     after.forEach((r, i) => expectNear(r.difference, before[i]!.difference, 0.3, `${r.size} ${r.role}`));
+    // the notches still meet: measured from the hem, a notch below the line keeps its distance and one above it moves by the amount, on both sides alike
+    after.forEach((r, i) => {
+      expect(r.notches.map((n) => n.first.name)).toEqual(before[i]!.notches.map((n) => n.first.name));
+      r.notches.forEach((n, k) => expectNear(n.difference, before[i]!.notches[k]!.difference, 0.3, `${r.size} ${r.role} ${n.first.name}`));
+    });
   });
 
   it('lengthening 25 mm at the upper-leg line moves the knee line 25 mm lower (trade reference §6 example 1, common practice)', () => {

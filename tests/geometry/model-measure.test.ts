@@ -139,6 +139,39 @@ describe('measurements', () => {
     expect([same.first.pieces, same.second.pieces]).toEqual([['back'], ['back 2']]);
   });
 
+  it('paired-seam report walks the notches from the hem: a 3 mm shift is outside the 2 mm tolerance, 1 mm within; a yoke\'s notch counts after the back (closed form)', () => {
+    const leg = rect.pieces[0]!;
+    const notched = (name: string, role: 'centre-front' | 'centre-back', notches: [number, number][]): Piece => ({
+      ...leg,
+      name,
+      outlines: leg.outlines.map((o) => ({ ...o, points: [...o.points, ...notches.map(([x, y], i) => ({ name: `n${i}`, kind: 'notch' as const, x, y }))] })),
+      edges: [...leg.edges, { name: role, role, from: 'ws', to: 'wc' }],
+    });
+    // side seam x = 0 from the hem (y = 800) up; inseam x = 200, drawn from the waist down to the hem
+    const front = notched('front', 'centre-front', [[0, 300], [200, 500]]);
+    const back = notched('back', 'centre-back', [[0, 303], [200, 501]]);
+    const report = pairedSeamReport(patternOf(front, back));
+    const side = report.find((r) => r.role === 'side-seam')!;
+    const inseam = report.find((r) => r.role === 'inseam')!;
+    expect(side.notches.map((n) => [n.first.fromHem, n.second.fromHem])).toEqual([[500, 497]]);
+    expectNear(side.notches[0]!.difference, 3, 1e-9);
+    expect(side.notchesMatch).toBe(false);
+    expect(inseam.notches.map((n) => [n.first.fromHem, n.second.fromHem])).toEqual([[300, 299]]);
+    expect(inseam.notchesMatch).toBe(true);
+    // a yoke on the back: its side seam continues the back's from its end away from its waist (y = 800)
+    const yoke = notched('yoke', 'centre-back', [[0, 790]]);
+    const withYoke = pairedSeamReport(patternOf(front, back, yoke)).find((r) => r.role === 'side-seam')!;
+    expect(withYoke.second.notches!.map((n) => [n.piece, n.fromHem])).toEqual([['back', 497], ['yoke', 810]]);
+    // one notch more on one side: they do not match, whatever the pairs say
+    expect(withYoke.notches).toHaveLength(1);
+    expect(withYoke.notchesMatch).toBe(false);
+    // a back without a hem edge has nothing to measure its notches from: no pairs, nothing flagged, and no count said
+    const hemless = { ...back, edges: back.edges.filter((e) => e.role !== 'hem') };
+    const unmeasured = pairedSeamReport(patternOf(front, hemless)).find((r) => r.role === 'side-seam')!;
+    expect([unmeasured.second.notches, unmeasured.notches, unmeasured.notchesMatch]).toEqual([undefined, [], true]);
+    expect(unmeasured.first.notches).toHaveLength(1);
+  });
+
   it('paired-seam report: equal seams match; a 5 mm difference is outside the 2 mm tolerance (trade reference §3.11, common practice)', () => {
     const back = { ...rect.pieces[0]!, name: 'back' };
     const p = patternOf(rect.pieces[0]!, back);
@@ -168,6 +201,9 @@ describe('measurements', () => {
       expectNear(r.difference, f - b, 1e-9);
       // front and back outseams (waist to hem) and inseams must be equal (trade reference §3.11): the demo is trued
       expect(r.withinTolerance, `${r.size} ${r.role}`).toBe(true);
+      // and its knee (and, on the side seam, hip) notches meet: within about 2–3 mm (§3.11)
+      expect(r.notches.map((n) => n.first.name)).toEqual(r.role === 'side-seam' ? ['knee-side', 'hip-side'] : ['knee-inseam']);
+      expect(r.notchesMatch, `${r.size} ${r.role} notches`).toBe(true);
     }
     const c = crotchLength(demo).find((x) => x.size === '10')!;
     expectNear(c.front, edgeLength(front, '10', 'centre-front')! + edgeLength(front, '10', 'crotch-curve')!, 1e-9);

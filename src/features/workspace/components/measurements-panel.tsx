@@ -1,12 +1,12 @@
 import { memo } from 'react';
 import { formatLength, type LengthUnit, PAIRED_SEAM_TOLERANCE, type Pattern } from '../../../../geometry/index.ts';
 import { cx } from '../../../lib/cx';
-import { EDGE_LABELS, measureRows, pairedSeams } from '../model/measurements';
+import { EDGE_LABELS, measureRows, notchWords, pairedSeams } from '../model/measurements';
 
 /**
  * Seam lengths and crotch length of the altered pattern, with the change a chosen alteration
  * made (`before` is the pattern without it), and the paired-seam report with a warning when
- * front and back differ by more than the usual tolerance.
+ * front and back, or their notches, differ by more than the usual tolerance.
  */
 export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, beforeLabel, unit, size }: { now: Pattern; before?: Pattern; beforeLabel?: string; unit: LengthUnit; size?: string }) {
   const rows = measureRows(now, before, size);
@@ -53,18 +53,27 @@ export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, 
       {pairs.length > 0 && (
         <div className="flex flex-col gap-1" aria-label="Paired seams">
           <h3 className="text-sm font-semibold text-ink-900">Paired seams (front against back)</h3>
-          {pairs.map((p) => (
-            <p
-              key={`${p.size}:${p.role}`}
-              role={p.withinTolerance ? undefined : 'alert'}
-              className={cx('rounded-md px-2 py-1 text-sm', p.withinTolerance ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}
-            >
-              {EDGE_LABELS[p.role]}: {p.first.piece} {formatLength(p.first.length, unit)}, {p.second.piece} {formatLength(p.second.length, unit)} —{' '}
-              {p.withinTolerance
-                ? `within ${formatLength(PAIRED_SEAM_TOLERANCE, unit)}`
-                : `differ by ${formatLength(Math.abs(p.difference), unit)}: true the seams before cutting (more than ${formatLength(PAIRED_SEAM_TOLERANCE, unit)})`}
-            </p>
-          ))}
+          {pairs.map((p) => {
+            const notches = notchWords(p, unit);
+            const ok = p.withinTolerance && p.notchesMatch;
+            return (
+              <p
+                key={`${p.size}:${p.role}`}
+                role={ok ? undefined : 'alert'}
+                className={cx('rounded-md px-2 py-1 text-sm', ok ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}
+              >
+                {EDGE_LABELS[p.role]}: {p.first.piece} {formatLength(p.first.length, unit)}, {p.second.piece} {formatLength(p.second.length, unit)} —{' '}
+                {p.withinTolerance
+                  ? `within ${formatLength(PAIRED_SEAM_TOLERANCE, unit)}`
+                  : `differ by ${formatLength(Math.abs(p.difference), unit)}: true the seams before cutting (more than ${formatLength(PAIRED_SEAM_TOLERANCE, unit)})`}
+                {notches !== undefined && (
+                  <span className="block text-xs font-normal">
+                    {p.notchesMatch ? notches : `${notches}: move the notches to meet before cutting`}
+                  </span>
+                )}
+              </p>
+            );
+          })}
         </div>
       )}
     </section>

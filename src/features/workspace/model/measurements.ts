@@ -8,7 +8,10 @@ import {
   EDGE_ROLES,
   type EdgeRole,
   edgeLength,
+  formatLength,
+  type LengthUnit,
   MeasureError,
+  PAIRED_SEAM_TOLERANCE,
   type PairedSeam,
   pairedSeamReport,
   type Pattern,
@@ -78,4 +81,22 @@ export function pairedSeams(pattern: Pattern, size: string | undefined): PairedS
     if (e instanceof MeasureError) return [];
     throw e;
   }
+}
+
+/**
+ * The notches of a paired seam in words, or undefined when neither side has any or a side cannot
+ * be measured from the hem: that they meet (within the tolerance), or each pair that does not and
+ * a side with notches the other lacks.
+ */
+export function notchWords(p: PairedSeam, unit: LengthUnit): string | undefined {
+  if (p.first.notches === undefined || p.second.notches === undefined) return undefined;
+  const a = p.first.notches.length;
+  const b = p.second.notches.length;
+  if (a === 0 && b === 0) return undefined;
+  if (p.notchesMatch) return `${a === 1 ? 'the notch meets' : a === 2 ? 'both notches meet' : `all ${a} notches meet`} within ${formatLength(PAIRED_SEAM_TOLERANCE, unit)}`;
+  const words = p.notches
+    .filter((n) => !n.withinTolerance)
+    .map((n) => `notch ${n.first.name} is ${formatLength(n.first.fromHem, unit)} from the hem on the ${p.first.piece}, ${formatLength(n.second.fromHem, unit)} on the ${p.second.piece}: ${formatLength(Math.abs(n.difference), unit)} apart`);
+  if (a !== b) words.push(`the ${p.first.piece} has ${a} ${a === 1 ? 'notch' : 'notches'} here, the ${p.second.piece} ${b}`);
+  return words.join('; ');
 }
