@@ -220,9 +220,45 @@ function readBlock(name: string, block: DxfBlock, toMm: (p: DxfVertex) => Point,
   };
 }
 
+/**
+ * Check the group structure before the parser sees it, up to the EOF group. The parser
+ * (dxf-parser 1.1) loops for ever on some broken files — a POLYLINE whose vertices are followed
+ * by anything but another VERTEX or SEQEND, which a group code that is not a number also leads
+ * to — and makes as many vertices as an LWPOLYLINE's count says, listed or not. Such files are
+ * refused here with the line where the problem is, as are files with too many entities.
+ */
+function checkDxfGroups(text: string): void {
+  const lines = text.split(/\r\n|\r|\n/);
+  let entities = 0;
+  let inPolyline = false;
+  let lw: { line: number; count: number | undefined; listed: number } | undefined;
+  for (let i = 0; i + 1 < lines.length; i += 2) {
+    const codeText = lines[i]!.trim();
+    if (!/^-?\d{1,4}$/.test(codeText)) throw new DxfImportError(`line ${i + 1}: "${codeText.slice(0, 20)}" is not a group code (a number): the file is damaged`);
+    const code = Number(codeText);
+    const value = lines[i + 1]!.trim();
+    if (lw) {
+      if (code === 90) lw.count = Number.parseInt(value, 10);
+      else if (code === 10) lw.listed++;
+    }
+    if (code !== 0) continue;
+    if (lw && lw.count !== undefined && lw.count > lw.listed)
+      throw new DxfImportError(`line ${lw.line}: the LWPOLYLINE says it has ${lw.count} vertices but lists ${lw.listed}: the file is damaged`);
+    lw = undefined;
+    if (value === 'EOF') return;
+    if (++entities > DXF_MAX_ENTITIES) throw new DxfImportError(`the file has more than ${DXF_MAX_ENTITIES} entities`);
+    if (inPolyline) {
+      if (value === 'SEQEND') inPolyline = false;
+      else if (value !== 'VERTEX') throw new DxfImportError(`line ${i + 2}: a POLYLINE's vertices are followed by ${value.slice(0, 20) || 'nothing'} instead of SEQEND: the file is damaged`);
+    } else if (value === 'POLYLINE') inPolyline = true;
+    else if (value === 'LWPOLYLINE') lw = { line: i + 2, count: undefined, listed: 0 };
+  }
+}
+
 /** Read an ASTM D6673 DXF file. Throws DxfImportError with where the problem is; imports nothing half-way. */
 export function importDxf(text: string): DxfImportResult {
   if (text.length > DXF_MAX_BYTES) throw new DxfImportError(`the file is larger than ${DXF_MAX_BYTES / 1024 / 1024} MB`);
+  checkDxfGroups(text);
   let doc: DxfDocument | null;
   try {
     doc = new DxfParser().parseSync(text) as DxfDocument | null;

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   D6673_LAYERS,
@@ -115,5 +116,64 @@ describe('ASTM D6673 DXF import', () => {
   it('refuses a file that is not DXF, or has no pieces', () => {
     expect(() => importDxf('<svg xmlns="http://www.w3.org/2000/svg"/>')).toThrowError(DxfImportError);
     expect(() => importDxf(writeD6673([]))).toThrowError(/no pattern pieces/);
+  });
+});
+
+describe('DXF import of damaged files (the parser never sees what would make it loop for ever)', () => {
+  const graded = writeD6673(
+    [0, 0.5].map((grow, i) => ({
+      piece: 'front',
+      size: i === 0 ? '8' : '10',
+      quantity: 2,
+      boundary: legInches(grow),
+      turnPoints: legInches(grow),
+      notches: [{ at: { x: (8 + grow) / 2, y: 0 }, inward: { x: 0, y: 0.25 } }],
+      grain: [{ x: 4, y: 5 }, { x: 4, y: 35 }] as [{ x: number; y: number }, { x: number; y: number }],
+    })),
+    'ENGLISH',
+  );
+  const groups = (...pairs: (string | number)[]) => ['0', 'SECTION', '2', 'ENTITIES', ...pairs.map(String), '0', 'ENDSEC', '0', 'EOF', ''].join('\n');
+
+  it('refuses, naming the line, a POLYLINE not ended by SEQEND, a group code that is not a number, and an LWPOLYLINE listing fewer vertices than it says', () => {
+    // each of these made dxf-parser 1.1 loop without end (found by mutating a D6673 file)
+    const polyline = groups(0, 'POLYLINE', 8, 1, 66, 1, 0, 'VERTEX', 8, 1, 10, 0, 20, 0, 0, 'LINE', 8, 1, 10, 0, 20, 0, 11, 1, 21, 1);
+    expect(() => importDxf(polyline)).toThrow(new DxfImportError("line 20: a POLYLINE's vertices are followed by LINE instead of SEQEND: the file is damaged"));
+    const shifted = graded.replace('\n0\nVERTEX\n', '\nRTEX\n');
+    expect(() => importDxf(shifted)).toThrow(/^line \d+: "RTEX" is not a group code \(a number\): the file is damaged$/);
+    const lw = groups(0, 'LWPOLYLINE', 8, 1, 90, 200000000, 10, 0, 20, 0);
+    expect(() => importDxf(lw)).toThrow(new DxfImportError('line 6: the LWPOLYLINE says it has 200000000 vertices but lists 1: the file is damaged'));
+    // what follows the EOF group is not read
+    expect(importDxf(`${graded}0\nPOLYLINE\n`).pattern.pieces).toHaveLength(1);
+  });
+
+  it('any damage to a D6673 file gives a pattern or a DxfImportError, never anything else (property)', () => {
+    const syntax = ['0', '\n', ' ', '-', '.', 'e', '9', 'VERTEX', 'SEQEND', 'POLYLINE', 'LWPOLYLINE', '90', 'EOF', 'NaN', '1e400'];
+    const damage = fc.array(
+      fc.oneof(
+        fc.record({ at: fc.nat(), cut: fc.integer({ min: 1, max: 40 }) }),
+        fc.record({ at: fc.nat(), put: fc.constantFrom(...syntax) }),
+        fc.record({ at: fc.nat(), end: fc.constant(true) }),
+      ),
+      { minLength: 1, maxLength: 4 },
+    );
+    let refused = 0;
+    fc.assert(
+      fc.property(damage, (edits) => {
+        let t = graded;
+        for (const e of edits) {
+          const i = e.at % (t.length + 1);
+          t = 'cut' in e ? t.slice(0, i) + t.slice(i + e.cut) : 'put' in e ? t.slice(0, i) + e.put + t.slice(i + 1) : t.slice(0, i);
+        }
+        try {
+          importDxf(t);
+        } catch (error) {
+          expect(error).toBeInstanceOf(DxfImportError);
+          refused++;
+        }
+      }),
+      { numRuns: 300 },
+    );
+    // not vacuous: most damaged files are refused
+    expect(refused).toBeGreaterThan(150);
   });
 });

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   MM_PER_UNIT,
@@ -193,5 +194,40 @@ describe('SVG import — unnamed pieces of a graded pattern', () => {
     );
     expect(r.pattern.pieces.every((p) => p.lines.length === 0)).toBe(true);
     expect(r.notes.join(' ')).toMatch(/line "hip" lies outside every piece/);
+  });
+});
+
+describe('SVG import of damaged files', () => {
+  it('any damage to a multi-size SVG gives a pattern or an SvgImportError / XmlError, never anything else (property)', () => {
+    const file = multiSizeSvg({ sizes: ['8', '10'] });
+    const syntax = ['<', '>', '"', '=', ' ', '-', '.', 'e', '9', 'M', 'Z', 'A', '&', '&#x0;', '<!ENTITY a "b">', 'transform="', 'NaN', '1e400'];
+    const damage = fc.array(
+      fc.oneof(
+        fc.record({ at: fc.nat(), cut: fc.integer({ min: 1, max: 40 }) }),
+        fc.record({ at: fc.nat(), put: fc.constantFrom(...syntax) }),
+        fc.record({ at: fc.nat(), end: fc.constant(true) }),
+      ),
+      { minLength: 1, maxLength: 4 },
+    );
+    let refused = 0;
+    fc.assert(
+      fc.property(damage, (edits) => {
+        let t = file;
+        for (const e of edits) {
+          const i = e.at % (t.length + 1);
+          t = 'cut' in e ? t.slice(0, i) + t.slice(i + e.cut) : 'put' in e ? t.slice(0, i) + e.put + t.slice(i + 1) : t.slice(0, i);
+        }
+        try {
+          importSvg(t);
+        } catch (error) {
+          expect(error instanceof SvgImportError || error instanceof XmlError, String(error)).toBe(true);
+          refused++;
+        }
+      }),
+      { numRuns: 150 },
+    );
+    // not vacuous: many damaged files are refused, and some still import
+    expect(refused).toBeGreaterThan(30);
+    expect(refused).toBeLessThan(150);
   });
 });
