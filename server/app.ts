@@ -23,6 +23,7 @@ import type { Mailer } from './modules/mail/mailer.ts';
 import { metaRouter } from './modules/meta/meta.router.ts';
 import { makesRouter } from './modules/makes/makes.router.ts';
 import { MakesService } from './modules/makes/makes.service.ts';
+import { type ImportLimits, ImportRunner } from './modules/patterns/import-runner.ts';
 import { patternsRouter } from './modules/patterns/patterns.router.ts';
 import { PatternsService } from './modules/patterns/patterns.service.ts';
 import { printsRouter } from './modules/prints/prints.router.ts';
@@ -47,6 +48,8 @@ export interface AppDeps {
   demoAccounts: readonly DemoAccount[] | null;
   /** The built client (vite build output); when missing, only the API is served. */
   clientDir?: string;
+  /** Time and memory limits for reading an uploaded pattern file (DEFAULT_IMPORT_LIMITS). */
+  importLimits?: ImportLimits;
 }
 
 const SESSION_MAX_AGE_MS = 14 * 24 * 60 * 60 * 1000;
@@ -114,7 +117,7 @@ export function createApp(deps: AppDeps): Express {
   );
   api.use('/account', accountRouter({ db: deps.db, users }));
   api.use('/admin', adminRouter({ users, mailer: deps.mailer }));
-  const patterns = new PatternsService(deps.db);
+  const patterns = new PatternsService(deps.db, new ImportRunner(deps.importLimits));
   const makes = new MakesService(deps.db, patterns);
   api.use('/patterns', patternsRouter({ patterns }));
   api.use('/profiles', profilesRouter({ profiles: new ProfilesService(deps.db) }));

@@ -73,6 +73,9 @@ describe('upload', () => {
       { name: 'entity.svg', content: '<?xml version="1.0"?><!DOCTYPE svg [<!ENTITY x "y">]><svg xmlns="http://www.w3.org/2000/svg">&x;</svg>' },
       { name: 'broken.json', content: '{"units": "mm", ' },
       { name: 'x.dxf', content: '0\nSECTION\n2\nENTITIES\n0\nENDSEC\n0\nEOF\n' },
+      // two damaged files that made the DXF parser loop without end (geometry/dxf-import.ts checkDxfGroups)
+      { name: 'count.dxf', content: '0\nSECTION\n2\nENTITIES\n0\nLWPOLYLINE\n8\n1\n90\n200000000\n10\n0\n20\n0\n0\nENDSEC\n0\nEOF\n' },
+      { name: 'seqend.dxf', content: '0\nSECTION\n2\nENTITIES\n0\nPOLYLINE\n8\n1\n0\nVERTEX\n10\n0\n20\n0\n0\nLINE\n0\nENDSEC\n0\nEOF\n' },
     ];
     for (const file of cases) {
       const res = await ada.upload('/api/patterns', file);
@@ -104,6 +107,48 @@ describe('upload', () => {
     expect(noToken.status).toBe(403);
     const res = await anon.upload('/api/patterns', { name: 'a.svg', content: multiSizeSvg() });
     expect(res.status).toBe(401);
+  });
+});
+
+describe('limits on reading a file (a worker thread, server/modules/patterns/import-runner.ts)', () => {
+  it('when a file takes longer than the time limit, then 422, nothing is stored, and the server goes on serving', async () => {
+    const slow = await createTestApp({ importLimits: { timeoutMs: 1, maxHeapMb: 512 } });
+    try {
+      const c = new Client(slow.app);
+      await c.signIn('ada@loomhollow.example', DEMO_PASSWORD);
+      const before = (await c.get('/api/patterns').expect(200)).body.patterns.length;
+      // nothing is read in 1 ms (the worker is not even started): each upload is refused, the next one too
+      for (const name of ['a.svg', 'b.svg']) {
+        const res = await c.upload('/api/patterns', { name, content: multiSizeSvg() });
+        expect(res.status).toBe(422);
+        expect(res.body.error.fields).toEqual({ file: 'took too long to read' });
+      }
+      expect((await c.get('/api/patterns').expect(200)).body.patterns.length).toBe(before);
+    } finally {
+      await slow.close();
+    }
+  });
+
+  it('when reading a file needs more memory than the limit, then 422 and the server goes on serving', async () => {
+    const small = await createTestApp({ importLimits: { timeoutMs: 20_000, maxHeapMb: 4 } });
+    try {
+      const c = new Client(small.app);
+      await c.signIn('ada@loomhollow.example', DEMO_PASSWORD);
+      const res = await c.upload('/api/patterns', { name: 'a.svg', content: multiSizeSvg() });
+      expect(res.status).toBe(422);
+      expect(res.body.error.fields).toEqual({ file: 'needs too much memory to read' });
+      await c.get('/api/patterns').expect(200);
+    } finally {
+      await small.close();
+    }
+  });
+
+  it('when several files arrive at once, then each is read in turn and each gets its own answer', async () => {
+    const files = [multiSizeSvg({ sizes: ['8'] }), 'not a pattern', multiSizeSvg({ sizes: ['8', '10'] })];
+    const answers = await Promise.all(files.map((content, i) => ada.upload('/api/patterns', { name: `p${i}.${i === 1 ? 'txt' : 'svg'}`, content })));
+    expect(answers.map((r) => r.status)).toEqual([201, 422, 201]);
+    expect(answers[0]!.body.pattern.sizes).toEqual(['8']);
+    expect(answers[2]!.body.pattern.sizes).toEqual(['8', '10']);
   });
 });
 

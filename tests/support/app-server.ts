@@ -28,6 +28,7 @@ export interface TestAppOptions {
   signInAttempts?: number;
   publicUrl?: string;
   serveClient?: boolean;
+  importLimits?: AppDeps['importLimits'];
 }
 
 /** The real app on a fresh database of its own (the demo studio seeded), with the local outbox; no port yet. */
@@ -53,6 +54,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     logger: pino({ level: 'silent' }),
     demoAccounts: DEMO_ACCOUNTS,
     ...(options.serveClient ? { clientDir: path.join(projectRoot, 'dist') } : {}),
+    ...(options.importLimits ? { importLimits: options.importLimits } : {}),
   });
   return {
     app,

@@ -1,14 +1,9 @@
 import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import {
-  DxfImportError,
   FitInputError,
   type Pattern,
   PatternError,
-  SvgImportError,
-  XmlError,
-  importDxf,
-  importSvg,
   parsePattern,
   type SizeChart,
   alignChartSizes,
@@ -18,6 +13,8 @@ import {
 import { AppError, forbidden, notFound } from '../../errors/app-error.ts';
 import type { Role } from '../users/user.entity.ts';
 import { UserEntity } from '../users/user.entity.ts';
+import { ImportRunner } from './import-runner.ts';
+import type { UploadedFile } from './import-upload.ts';
 import { type PatternSource, PatternEntity } from './pattern.entity.ts';
 import { type PatternDetailDto, type PatternSummaryDto, type SizeChartsDto, toPatternDetailDto, toPatternSummaryDto } from './patterns.mapper.ts';
 
@@ -26,51 +23,18 @@ export interface Actor {
   role: Role;
 }
 
-export interface UploadedFile {
-  originalname: string;
-  buffer: Buffer;
-}
 
 /** Roles that may publish a pattern to the shared library. */
 const PUBLISHERS: readonly Role[] = ['coach', 'admin'];
 
-/** Read an uploaded file with the engine's importers. Nothing of the file but the geometry is kept. */
-export function importUpload(file: UploadedFile): { pattern: Pattern; format: PatternSource; notes: string[] } {
-  const ext = path.extname(file.originalname).toLowerCase();
-  const head = file.buffer.subarray(0, 512).toString('latin1').trimStart();
-  const format: PatternSource | undefined =
-    ext === '.svg' || head.startsWith('<') ? 'svg' : ext === '.dxf' || /^0\s*\r?\n\s*SECTION/.test(head) ? 'dxf' : ext === '.json' || head.startsWith('{') ? 'json' : undefined;
-  if (!format) throw new AppError('unprocessable', 'Blockwright reads SVG, DXF (ASTM D6673) and its own JSON pattern files; this file is none of them.', 422, { file: 'Use an .svg, .dxf or .json file.' });
-  try {
-    if (format === 'svg') {
-      const text = new TextDecoder('utf-8', { fatal: true }).decode(file.buffer);
-      const r = importSvg(text);
-      return { pattern: r.pattern, format, notes: [...r.notes, ...(r.skipped.length > 0 ? [`not imported: ${r.skipped.join(', ')}`] : [])] };
-    }
-    if (format === 'dxf') {
-      // DXF before AutoCAD 2007 is in the drawing's code page; latin1 reads every byte.
-      const r = importDxf(file.buffer.toString('latin1'));
-      return { pattern: r.pattern, format, notes: [...r.notes] };
-    }
-    let json: unknown;
-    try {
-      json = JSON.parse(file.buffer.toString('utf8'));
-    } catch {
-      throw new AppError('unprocessable', 'The JSON file cannot be read: it is not valid JSON.', 422, { file: 'not valid JSON' });
-    }
-    return { pattern: parsePattern(json), format, notes: [] };
-  } catch (e) {
-    if (e instanceof SvgImportError || e instanceof XmlError || e instanceof DxfImportError || e instanceof PatternError)
-      throw new AppError('unprocessable', `The ${format.toUpperCase()} file cannot be imported: ${e.message}`, 422, { file: e.message });
-    if (e instanceof TypeError && /decode/i.test(e.message))
-      throw new AppError('unprocessable', 'The SVG file is not UTF-8 text.', 422, { file: 'not UTF-8 text' });
-    throw e;
-  }
-}
 
 /** Patterns: upload, read, label, publish. Private to the owner until a coach publishes one. */
 export class PatternsService {
-  constructor(private readonly db: DataSource) {}
+  constructor(
+    private readonly db: DataSource,
+    /** Reads uploaded files off the main thread, with limits (see import-runner.ts). */
+    private readonly imports: ImportRunner = new ImportRunner(),
+  ) {}
 
   private get repo() {
     return this.db.getRepository(PatternEntity);
@@ -101,7 +65,7 @@ export class PatternsService {
 
   async upload(ownerId: string, file: UploadedFile | undefined, name: string | undefined): Promise<PatternDetailDto> {
     if (!file) throw new AppError('invalid_input', 'Choose a pattern file to upload.', 400, { file: 'Choose an SVG or DXF file.' });
-    const imported = importUpload(file);
+    const imported = await this.imports.run(file);
     const fallbackName = imported.pattern.name ?? (path.basename(file.originalname, path.extname(file.originalname)).trim() || 'Untitled pattern');
     const entity = await this.create(ownerId, { pattern: imported.pattern, name: name ?? fallbackName.slice(0, 120), format: imported.format, sourceName: file.originalname, notes: imported.notes });
     return this.detail({ id: ownerId, role: 'sewist' }, entity.id);
