@@ -226,6 +226,12 @@ describe('the pattern\'s size table', () => {
     await section.getByRole('button', { name: 'Read the pasted cells' }).click();
     await section.getByText('Read 2 sizes into Waist, Hip.').waitFor();
     await section.getByText(`Sizes named as the pattern names them: Size ${a!.size.padStart(2, '0')} → ${a!.size}.`).waitFor();
+    // A size typed the printed chart's way takes the pattern's name when the field is left.
+    const sizeField = section.getByRole('textbox', { name: 'Size name, row 2' });
+    expect(await sizeField.inputValue()).toBe(b!.size);
+    await sizeField.fill(`SIZE ${b!.size.padStart(2, '0')}`);
+    await sizeField.blur();
+    expect(await sizeField.inputValue()).toBe(b!.size);
     // Leaving with unsaved cells asks first; staying keeps them.
     await page.getByRole('link', { name: 'Makes', exact: true }).click();
     const leave = page.getByRole('alertdialog', { name: 'Leave without saving the size table?' });

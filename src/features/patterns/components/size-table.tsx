@@ -183,12 +183,17 @@ export function SizeTable({ patternId, units, canEdit, includesSeamAllowance }: 
         header: 'Size',
         cell: (info) =>
           canEdit ? (
-            <SizeInput label={`Size name, row ${info.row.original.index + 1}`} value={info.getValue()} onCommit={(typed) =>
+            <SizeInput
+              label={`Size name, row ${info.row.original.index + 1}`}
+              value={info.getValue()}
+              onCommit={(typed) =>
                 change((d) => {
-                  const size = asPatternSize(typed, patternSizes, d.sizes.filter((_, i) => i !== info.row.original.index).map((s) => s.size));
+                  const others = d.sizes.filter((_, i) => i !== info.row.original.index).map((s) => s.size);
+                  const size = asPatternSize(typed, patternSizes, others);
                   return { ...d, sizes: d.sizes.map((s, i) => (i === info.row.original.index ? { ...s, size } : s)) };
                 })
-              } />
+              }
+            />
           ) : (
             <span className="font-semibold">{info.getValue()}</span>
           ),
