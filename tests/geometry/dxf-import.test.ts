@@ -10,6 +10,7 @@ import {
   outlineContour,
   pathFromSvg,
 } from '../../geometry/index.ts';
+import { damagedCopies } from '../support/damage.ts';
 import { writeD6673, type DxfPieceSpec } from './d6673-writer.ts';
 
 /** A simple leg-like piece in inches, y up (DXF), with its corners as turn points. */
@@ -22,22 +23,26 @@ function legInches(grow: number): DxfPieceSpec['boundary'] {
   ];
 }
 
+/** The front in sizes 8 and 10 (grown ½ in), with turn points, a notch on the waist and a grain line. */
+function gradedFront(): DxfPieceSpec[] {
+  return [0, 0.5].map((grow, i) => ({
+    piece: 'front',
+    size: i === 0 ? '8' : '10',
+    quantity: 2,
+    boundary: legInches(grow),
+    turnPoints: legInches(grow),
+    notches: [{ at: { x: (8 + grow) / 2, y: 0 }, inward: { x: 0, y: 0.25 } }],
+    grain: [{ x: 4, y: 5 }, { x: 4, y: 35 }],
+  }));
+}
+
 describe('ASTM D6673 DXF import', () => {
   it('uses the layer numbers of D6673 (trade reference §1.3, secondary summary of D6673-10)', () => {
     expect(D6673_LAYERS).toMatchObject({ boundary: '1', turnPoints: '2', curvePoints: '3', notches: '4', mirror: '6', grain: '7', internal: '8', drillHoles: '13' });
   });
 
   it('reads a graded nest in inches: 25.4 mm per inch exactly, y flipped, one piece with a size per block', () => {
-    const specs: DxfPieceSpec[] = [0, 0.5].map((grow, i) => ({
-      piece: 'front',
-      size: i === 0 ? '8' : '10',
-      quantity: 2,
-      boundary: legInches(grow),
-      turnPoints: legInches(grow),
-      notches: [{ at: { x: (8 + grow) / 2, y: 0 }, inward: { x: 0, y: 0.25 } }],
-      grain: [{ x: 4, y: 5 }, { x: 4, y: 35 }],
-    }));
-    const { pattern, notes } = importDxf(writeD6673(specs, 'ENGLISH'));
+    const { pattern, notes } = importDxf(writeD6673(gradedFront(), 'ENGLISH'));
     expect(notes).toEqual([]);
     expect(pattern.pieces).toHaveLength(1);
     const piece = pattern.pieces[0]!;
@@ -120,18 +125,7 @@ describe('ASTM D6673 DXF import', () => {
 });
 
 describe('DXF import of damaged files (the parser never sees what would make it loop for ever)', () => {
-  const graded = writeD6673(
-    [0, 0.5].map((grow, i) => ({
-      piece: 'front',
-      size: i === 0 ? '8' : '10',
-      quantity: 2,
-      boundary: legInches(grow),
-      turnPoints: legInches(grow),
-      notches: [{ at: { x: (8 + grow) / 2, y: 0 }, inward: { x: 0, y: 0.25 } }],
-      grain: [{ x: 4, y: 5 }, { x: 4, y: 35 }] as [{ x: number; y: number }, { x: number; y: number }],
-    })),
-    'ENGLISH',
-  );
+  const graded = writeD6673(gradedFront(), 'ENGLISH');
   const groups = (...pairs: (string | number)[]) => ['0', 'SECTION', '2', 'ENTITIES', ...pairs.map(String), '0', 'ENDSEC', '0', 'EOF', ''].join('\n');
 
   it('refuses, naming the line, a POLYLINE not ended by SEQEND, a group code that is not a number, and an LWPOLYLINE listing fewer vertices than it says', () => {
@@ -148,22 +142,9 @@ describe('DXF import of damaged files (the parser never sees what would make it 
 
   it('any damage to a D6673 file gives a pattern or a DxfImportError, never anything else (property)', () => {
     const syntax = ['0', '\n', ' ', '-', '.', 'e', '9', 'VERTEX', 'SEQEND', 'POLYLINE', 'LWPOLYLINE', '90', 'EOF', 'NaN', '1e400'];
-    const damage = fc.array(
-      fc.oneof(
-        fc.record({ at: fc.nat(), cut: fc.integer({ min: 1, max: 40 }) }),
-        fc.record({ at: fc.nat(), put: fc.constantFrom(...syntax) }),
-        fc.record({ at: fc.nat(), end: fc.constant(true) }),
-      ),
-      { minLength: 1, maxLength: 4 },
-    );
     let refused = 0;
     fc.assert(
-      fc.property(damage, (edits) => {
-        let t = graded;
-        for (const e of edits) {
-          const i = e.at % (t.length + 1);
-          t = 'cut' in e ? t.slice(0, i) + t.slice(i + e.cut) : 'put' in e ? t.slice(0, i) + e.put + t.slice(i + 1) : t.slice(0, i);
-        }
+      fc.property(damagedCopies(graded, syntax), (t) => {
         try {
           importDxf(t);
         } catch (error) {

@@ -16,6 +16,7 @@ import {
   parsePattern,
   pathFromSvg,
 } from '../../geometry/index.ts';
+import { damagedCopies } from '../support/damage.ts';
 import { multiSizeSvg } from '../support/pattern-svg.ts';
 import { expectNear, expectPointNear } from './helpers.ts';
 
@@ -201,22 +202,9 @@ describe('SVG import of damaged files', () => {
   it('any damage to a multi-size SVG gives a pattern or an SvgImportError / XmlError, never anything else (property)', () => {
     const file = multiSizeSvg({ sizes: ['8', '10'] });
     const syntax = ['<', '>', '"', '=', ' ', '-', '.', 'e', '9', 'M', 'Z', 'A', '&', '&#x0;', '<!ENTITY a "b">', 'transform="', 'NaN', '1e400'];
-    const damage = fc.array(
-      fc.oneof(
-        fc.record({ at: fc.nat(), cut: fc.integer({ min: 1, max: 40 }) }),
-        fc.record({ at: fc.nat(), put: fc.constantFrom(...syntax) }),
-        fc.record({ at: fc.nat(), end: fc.constant(true) }),
-      ),
-      { minLength: 1, maxLength: 4 },
-    );
     let refused = 0;
     fc.assert(
-      fc.property(damage, (edits) => {
-        let t = file;
-        for (const e of edits) {
-          const i = e.at % (t.length + 1);
-          t = 'cut' in e ? t.slice(0, i) + t.slice(i + e.cut) : 'put' in e ? t.slice(0, i) + e.put + t.slice(i + 1) : t.slice(0, i);
-        }
+      fc.property(damagedCopies(file, syntax), (t) => {
         try {
           importSvg(t);
         } catch (error) {
