@@ -117,14 +117,20 @@ function legOutline(i: number, spec: LegSpec): { outline: Outline; levels: Recor
   const hemSide: Point = { x: -hemHalf, y: yHem };
   const kneeSide: Point = { x: -kneeHalf, y: yKnee };
   const curveDepth = yCrotch - curveStartY;
+  // the direction square to the inseam's start, pointing out of the piece's crotch point
+  const inseamStart = { x: inseamCurve[1].x - crotch.x, y: inseamCurve[1].y - crotch.y };
+  const inseamStartLength = Math.hypot(inseamStart.x, inseamStart.y);
+  const square: Point = { x: inseamStart.y / inseamStartLength, y: -inseamStart.x / inseamStartLength };
   // side seam above the hip is straight; below it continues tangentially into the thigh curve
   const sideDir = { x: (sideHip.x - sideTop.x) / (yHip - topSide), y: 1 };
   const d = [
     `M${P(sideTop)}`,
     `L${P(centreTop)}`,
     `L${P(centreCurveStart)}`,
-    // crotch curve: leaves the centre seam along its lean, arrives at the crotch point horizontally
-    `C${P({ x: centreCurveStart.x + centreLean * 0.55 * curveDepth, y: centreCurveStart.y + 0.55 * curveDepth })} ${P({ x: crotch.x - 0.55 * ext, y: crotch.y })} ${P(crotch)}`,
+    // crotch curve: leaves the centre seam along its lean, arrives at the crotch point square to
+    // the inseam, so front and back laid together at the inseam make one smooth curve (trade
+    // reference §3.11 shape checks)
+    `C${P({ x: centreCurveStart.x + centreLean * 0.55 * curveDepth, y: centreCurveStart.y + 0.55 * curveDepth })} ${P({ x: crotch.x - 0.55 * ext * square.x, y: crotch.y - 0.55 * ext * square.y })} ${P(crotch)}`,
     `C${P(inseamCurve[1])} ${P(inseamCurve[2])} ${P(kneeIn)}`,
     `L${P(hemIn)}`,
     `L${P(hemSide)}`,

@@ -4,8 +4,8 @@
  * included in the outline).
  */
 import { type Edge, type EdgeRole, type Outline, type Pattern, type Piece, landmarkOf, outlineContour } from './model.ts';
-import { type Contour, contourArea, contourFlatten, contourLength, contourLineIntersections, contourNearest, contourOffsetOf, contourStretch, pathFromSvg } from './path.ts';
-import { PAIRED_SEAM_TOLERANCE } from './tolerance.ts';
+import { type Contour, contourArea, contourFlatten, contourLength, contourLineIntersections, contourNearest, contourOffsetOf, contourStretch, pathFromSvg, segmentEndTangents } from './path.ts';
+import { CROTCH_JOIN_TOLERANCE_DEG, PAIRED_SEAM_TOLERANCE } from './tolerance.ts';
 import { type Point, vecDistance, vecDot, vecNormalize, vecSub } from './vec.ts';
 
 /** Thrown when something to measure is missing (an edge's landmark, a level line). */
@@ -246,6 +246,62 @@ export function pairedSeamReport(
       const notchesMatch = !measurable || (an.length === bn.length && notches.every((n) => n.withinTolerance));
       out.push({ size: o.size, role, first: a, second: b, difference, withinTolerance: Math.abs(difference) <= tol, notches, notchesMatch });
     }
+  }
+  return out;
+}
+
+/** Where front and back crotch curves meet the inseam, per size the two pieces share. */
+export interface CrotchJoin {
+  readonly size: string;
+  /** The angle between the crotch curve and the inseam at the crotch point (degrees), front and back. */
+  readonly first: { readonly piece: string; readonly angle: number };
+  readonly second: { readonly piece: string; readonly angle: number };
+  /** How far the joined crotch curve turns where front and back meet: |180° − (first + second)|. */
+  readonly turn: number;
+  readonly smooth: boolean;
+}
+
+/** The unit direction from an edge's end at `corner` into the edge. */
+function awayFrom(outline: Outline, edge: Edge, corner: string): Point {
+  const stretch = edgeContour(outline, edge);
+  const segments = stretch.segments;
+  if (edge.from === corner) return segmentEndTangents(segments[0]!).start;
+  const end = segmentEndTangents(segments[segments.length - 1]!).end;
+  return { x: -end.x, y: -end.y };
+}
+
+/**
+ * The crotch curves where they meet the inseam (trade reference §3.11 shape checks: put the
+ * front and back crotch curves together at the crotch point, inseams aligned, and check that the
+ * combined curve is smooth). On each piece, the angle at the crotch point — the landmark its
+ * crotch-curve and inseam edges share — between the two; laid together along the inseam, the
+ * two curves continue each other without a turn when the angles add up to 180°.
+ * `tolerance` (degrees) defaults to CROTCH_JOIN_TOLERANCE_DEG. Empty when a piece lacks the edges.
+ */
+export function crotchJoin(pattern: Pattern, options: { first?: string; second?: string; tolerance?: number } = {}): CrotchJoin[] {
+  const first = pattern.pieces.find((p) => p.name === (options.first ?? 'front'));
+  const second = pattern.pieces.find((p) => p.name === (options.second ?? 'back'));
+  if (!first || !second) return [];
+  const tol = options.tolerance ?? CROTCH_JOIN_TOLERANCE_DEG;
+  const angleAt = (piece: Piece, size: string): number | undefined => {
+    const curve = piece.edges.find((e) => e.role === 'crotch-curve');
+    const inseam = piece.edges.find((e) => e.role === 'inseam');
+    const outline = piece.outlines.find((o) => o.size === size);
+    if (!curve || !inseam || !outline) return undefined;
+    const corner = [curve.from, curve.to].find((n) => n === inseam.from || n === inseam.to);
+    if (corner === undefined) return undefined;
+    const a = awayFrom(outline, curve, corner);
+    const b = awayFrom(outline, inseam, corner);
+    return (Math.acos(Math.max(-1, Math.min(1, vecDot(a, b)))) * 180) / Math.PI;
+  };
+  const out: CrotchJoin[] = [];
+  for (const o of first.outlines) {
+    if (!second.outlines.some((q) => q.size === o.size)) continue;
+    const a = angleAt(first, o.size);
+    const b = angleAt(second, o.size);
+    if (a === undefined || b === undefined) continue;
+    const turn = Math.abs(180 - a - b);
+    out.push({ size: o.size, first: { piece: first.name, angle: a }, second: { piece: second.name, angle: b }, turn, smooth: turn <= tol });
   }
   return out;
 }

@@ -64,6 +64,15 @@ export const CLOSE_GAP = 0.01;
 export const PAIRED_SEAM_TOLERANCE = 2;
 
 /**
+ * How far (degrees) the front and back crotch curves, laid together at the inseam, may turn
+ * where they meet and still count as one smooth curve (trade reference §3.11 shape checks).
+ * Reason, our own threshold (no source): a turn of k° shows as a step of about sin(k) × the
+ * seam allowance at the allowance's edge; 5° at 5/8 in (15.9 mm) is 1.4 mm, inside
+ * PAIRED_SEAM_TOLERANCE.
+ */
+export const CROTCH_JOIN_TOLERANCE_DEG = 5;
+
+/**
  * Default width of the truing zone of a parallel spread (mm, measured along the grain).
  * The jog that a lengthen/shorten or rise leaves in a slanted edge is blended over this
  * band, centred on the line. Reason: trade reference §3.1 asks for the step to be bridged

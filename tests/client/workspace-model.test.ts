@@ -4,7 +4,7 @@ import { type AlterationEntry, type PairedSeam, applyOps, demoPattern, formatLen
 import { describeIntent, describeOp, inUnits } from '../../src/features/workspace/model/describe.ts';
 import { amountAt, amountHandle, handlePoint } from '../../src/features/workspace/model/handles.ts';
 import { applyIntent, type Intent, invertIntent, newEntryId } from '../../src/features/workspace/model/intents.ts';
-import { measureRows, notchWords, pairedSeams } from '../../src/features/workspace/model/measurements.ts';
+import { crotchJoinShown, crotchJoinWords, measureRows, notchWords, pairedSeams } from '../../src/features/workspace/model/measurements.ts';
 import { prefixFor, previewWith, replaySafely } from '../../src/features/workspace/model/replay.ts';
 import { acceptPlan } from '../../src/features/workspace/model/plan.ts';
 import { BLEND } from '../bench/alterations.ts';
@@ -156,6 +156,15 @@ describe('replay in the browser and the drag preview', () => {
     const fewer = { ...side, second: { ...side.second, notches: side.second.notches!.slice(0, 1) }, notches: [knee], notchesMatch: false };
     expect(notchWords(fewer, 'in')).toBe('the front has 2 notches here, the back + yoke 1');
     expect(notchWords({ ...side, first: { ...side.first, notches: [] }, second: { ...side.second, notches: [] }, notches: [] }, 'in')).toBeUndefined();
+  });
+
+  it('the crotch curves\' join in words: square on the demo, and a turn to true after blending sizes across the crotch', () => {
+    expect(crotchJoinWords(crotchJoinShown(demo, '10')!)).toBe('Crotch curves: front 90°, back 90° at the crotch point — laid together at the inseam they join smoothly');
+    // the seeded blend (size 4 at the hip, 8 at the thigh) bends the curves near the crotch point: the sewist trues them
+    const blended = replayAlterations(demo, entries.slice(0, 1)).pattern;
+    const join = crotchJoinShown(blended, undefined)!;
+    expect(join.smooth).toBe(false);
+    expect(crotchJoinWords(join)).toMatch(/^Crotch curves: front \d+°, back \d+° at the crotch point — laid together at the inseam they turn \d+° where they meet: true the crotch curve before cutting \(more than 5°\)$/);
   });
 });
 

@@ -4,6 +4,7 @@ import {
   AlterationError,
   contourArea,
   contourIsSimple,
+  crotchJoin,
   crotchLength,
   demoPattern,
   edgeLength,
@@ -145,6 +146,8 @@ describe('lengthen and rise on the demo pattern — trade facts', () => {
     const after = pairedSeamReport(out);
     after.forEach((r, i) => expectNear(r.difference, before[i]!.difference, 0.3, `${r.size} ${r.role}`));
     // the notches still meet: measured from the hem, a notch below the line keeps its distance and one above it moves by the amount, on both sides alike
+    // the crotch point is above the line: its angles stay as they were
+    crotchJoin(out).forEach((j, i) => expectNear(j.turn, crotchJoin(demo)[i]!.turn, 1e-6, `crotch join ${j.size}`));
     after.forEach((r, i) => {
       expect(r.notches.map((n) => n.first.name)).toEqual(before[i]!.notches.map((n) => n.first.name));
       r.notches.forEach((n, k) => expectNear(n.difference, before[i]!.notches[k]!.difference, 0.3, `${r.size} ${r.role} ${n.first.name}`));
@@ -177,6 +180,8 @@ describe('lengthen and rise on the demo pattern — trade facts', () => {
     const before = crotchLength(demo).find((c) => c.size === '10')!;
     const after = crotchLength(out).find((c) => c.size === '10')!;
     expectNear(after.total - before.total, 2 * 50.8, 3);
+    // the crotch point is below the rise line and stays square: front and back still join smoothly
+    for (const j of crotchJoin(out)) expect(j.turn, j.size).toBeLessThan(0.01);
   });
 });
 

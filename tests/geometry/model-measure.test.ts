@@ -5,6 +5,7 @@ import {
   type Piece,
   contourArea,
   contourIsSimple,
+  crotchJoin,
   crotchLength,
   demoPattern,
   edgeLength,
@@ -172,6 +173,46 @@ describe('measurements', () => {
     expect(unmeasured.first.notches).toHaveLength(1);
   });
 
+  it('crotch join: the angle between crotch curve and inseam on each piece, and the turn where they meet laid together (closed form)', () => {
+    // a square corner at the crotch point B (100, 0); the back's crotch curve comes up from it at 30° above the line
+    const quad = (name: string, role: 'centre-front' | 'centre-back', top: { x: number; y: number }): Piece => ({
+      name,
+      outlines: [
+        {
+          size: '10',
+          d: `M${top.x} ${top.y} L100 0 L100 500 L0 500 Z`,
+          points: [
+            { name: 'a', kind: 'corner', x: top.x, y: top.y },
+            { name: 'b', kind: 'corner', x: 100, y: 0 },
+            { name: 'c', kind: 'corner', x: 100, y: 500 },
+            { name: 'd', kind: 'corner', x: 0, y: 500 },
+          ],
+        },
+      ],
+      lines: [],
+      edges: [
+        { name: 'crotch curve', role: 'crotch-curve', from: 'a', to: 'b' },
+        { name: 'inseam', role: 'inseam', from: 'b', to: 'c' },
+        { name: 'hem', role: 'hem', from: 'c', to: 'd' },
+        { name: role, role, from: 'd', to: 'a' },
+      ],
+      cut: { count: 2, onFold: false },
+      seamAllowanceIncluded: false,
+    });
+    const front = quad('front', 'centre-front', { x: 0, y: 0 });
+    const square = crotchJoin(patternOf(front, quad('back', 'centre-back', { x: 0, y: 0 })))[0]!;
+    expectNear(square.first.angle, 90, 1e-9);
+    expectNear(square.turn, 0, 1e-9);
+    expect(square.smooth).toBe(true);
+    const slanted = crotchJoin(patternOf(front, quad('back', 'centre-back', { x: 0, y: -100 * Math.tan(Math.PI / 6) })))[0]!;
+    // away from B along the back's curve: (−cos 30°, −sin 30°); along the inseam: (0, 1) → 120°
+    expectNear(slanted.second.angle, 120, 1e-9);
+    expectNear(slanted.turn, 30, 1e-9);
+    expect(slanted.smooth).toBe(false);
+    // within the 5° tolerance: 3° is smooth
+    expect(crotchJoin(patternOf(front, quad('back', 'centre-back', { x: 0, y: -100 * Math.tan((3 * Math.PI) / 180) })))[0]!.smooth).toBe(true);
+  });
+
   it('paired-seam report: equal seams match; a 5 mm difference is outside the 2 mm tolerance (trade reference §3.11, common practice)', () => {
     const back = { ...rect.pieces[0]!, name: 'back' };
     const p = patternOf(rect.pieces[0]!, back);
@@ -205,6 +246,10 @@ describe('measurements', () => {
       expect(r.notches.map((n) => n.first.name)).toEqual(r.role === 'side-seam' ? ['knee-side', 'hip-side'] : ['knee-inseam']);
       expect(r.notchesMatch, `${r.size} ${r.role} notches`).toBe(true);
     }
+    // and front and back crotch curves, laid together at the inseam, make one smooth curve (§3.11 shape checks)
+    const joins = crotchJoin(demo);
+    expect(joins).toHaveLength(11);
+    for (const j of joins) expect(j.turn, j.size).toBeLessThan(0.01);
     const c = crotchLength(demo).find((x) => x.size === '10')!;
     expectNear(c.front, edgeLength(front, '10', 'centre-front')! + edgeLength(front, '10', 'crotch-curve')!, 1e-9);
     expectNear(c.total, c.front + c.back, 1e-9);

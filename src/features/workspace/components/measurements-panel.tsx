@@ -1,16 +1,18 @@
 import { memo } from 'react';
 import { formatLength, type LengthUnit, PAIRED_SEAM_TOLERANCE, type Pattern } from '../../../../geometry/index.ts';
 import { cx } from '../../../lib/cx';
-import { EDGE_LABELS, measureRows, notchWords, pairedSeams } from '../model/measurements';
+import { EDGE_LABELS, crotchJoinShown, crotchJoinWords, measureRows, notchWords, pairedSeams } from '../model/measurements';
 
 /**
  * Seam lengths and crotch length of the altered pattern, with the change a chosen alteration
  * made (`before` is the pattern without it), and the paired-seam report with a warning when
- * front and back, or their notches, differ by more than the usual tolerance.
+ * front and back, or their notches, differ by more than the usual tolerance, or their crotch
+ * curves do not join smoothly at the inseam.
  */
 export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, beforeLabel, unit, size }: { now: Pattern; before?: Pattern; beforeLabel?: string; unit: LengthUnit; size?: string }) {
   const rows = measureRows(now, before, size);
   const pairs = pairedSeams(now, size);
+  const join = crotchJoinShown(now, size);
   return (
     <section aria-labelledby="measure-heading" className="flex flex-col gap-3">
       <h2 id="measure-heading" className="font-display text-lg text-ink-900">
@@ -74,6 +76,11 @@ export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, 
               </p>
             );
           })}
+          {join && (
+            <p role={join.smooth ? undefined : 'alert'} className={cx('rounded-md px-2 py-1 text-sm', join.smooth ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}>
+              {crotchJoinWords(join)}
+            </p>
+          )}
         </div>
       )}
     </section>

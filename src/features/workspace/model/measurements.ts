@@ -4,6 +4,9 @@
  * Pure: numbers in millimetres from geometry/measure.ts.
  */
 import {
+  CROTCH_JOIN_TOLERANCE_DEG,
+  type CrotchJoin,
+  crotchJoin,
   crotchLength,
   EDGE_ROLES,
   type EdgeRole,
@@ -70,17 +73,41 @@ export function measureRows(now: Pattern, before: Pattern | undefined, size: str
   return rows.map((r) => ({ ...r, before: old.get(r.key) }));
 }
 
+/** The size a report is shown for: the one asked for when the report has it, else its middle size. */
+function shownSize(sizes: readonly string[], size: string | undefined): string | undefined {
+  return size !== undefined && sizes.includes(size) ? size : sizes[Math.floor((sizes.length - 1) / 2)];
+}
+
 /** Front against back for inseam and side seam; empty when there is no front and back with those edges. */
 export function pairedSeams(pattern: Pattern, size: string | undefined): PairedSeam[] {
   try {
     const report = pairedSeamReport(pattern);
-    const sizes = [...new Set(report.map((r) => r.size))];
-    const chosen = size !== undefined && sizes.includes(size) ? size : sizes[Math.floor((sizes.length - 1) / 2)];
+    const chosen = shownSize([...new Set(report.map((r) => r.size))], size);
     return report.filter((r) => r.size === chosen);
   } catch (e) {
     if (e instanceof MeasureError) return [];
     throw e;
   }
+}
+
+/** Where the front and back crotch curves meet the inseam, in the size shown; undefined when a piece lacks those edges. */
+export function crotchJoinShown(pattern: Pattern, size: string | undefined): CrotchJoin | undefined {
+  try {
+    const joins = crotchJoin(pattern);
+    const chosen = shownSize(joins.map((j) => j.size), size);
+    return joins.find((j) => j.size === chosen);
+  } catch (e) {
+    if (e instanceof MeasureError) return undefined;
+    throw e;
+  }
+}
+
+/** The crotch curves' join in words: each piece's angle at the crotch point, and whether the joined curve turns there. */
+export function crotchJoinWords(j: CrotchJoin): string {
+  const angles = `${j.first.piece} ${Math.round(j.first.angle)}°, ${j.second.piece} ${Math.round(j.second.angle)}° at the crotch point`;
+  return j.smooth
+    ? `Crotch curves: ${angles} — laid together at the inseam they join smoothly`
+    : `Crotch curves: ${angles} — laid together at the inseam they turn ${Math.round(j.turn)}° where they meet: true the crotch curve before cutting (more than ${CROTCH_JOIN_TOLERANCE_DEG}°)`;
 }
 
 /**
