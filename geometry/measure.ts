@@ -193,11 +193,12 @@ const bodySide = (piece: Piece): 'front' | 'back' | undefined =>
  * landmarks lying on the seam, by their distance along it from the hem (the end the named
  * piece's seam shares with its hem edge; a continuing piece's from its end away from its waist
  * edge, after the named piece's seam). The k-th from the hem on one side is paired with the k-th
- * on the other; `tolerance` applies to each pair.
+ * on the other; `tolerance` applies to each pair. `sizes`: only these (all the two pieces share
+ * when not given).
  */
 export function pairedSeamReport(
   pattern: Pattern,
-  options: { first?: string; second?: string; roles?: readonly EdgeRole[]; tolerance?: number } = {},
+  options: { first?: string; second?: string; roles?: readonly EdgeRole[]; tolerance?: number; sizes?: readonly string[] } = {},
 ): PairedSeam[] {
   const first = pattern.pieces.find((p) => p.name === (options.first ?? 'front'));
   const second = pattern.pieces.find((p) => p.name === (options.second ?? 'back'));
@@ -229,7 +230,7 @@ export function pairedSeamReport(
   };
   const out: PairedSeam[] = [];
   for (const o of first.outlines) {
-    if (!second.outlines.some((q) => q.size === o.size)) continue;
+    if (!second.outlines.some((q) => q.size === o.size) || (options.sizes && !options.sizes.includes(o.size))) continue;
     for (const role of roles) {
       const a = sideOf(first, o.size, role);
       const b = sideOf(second, o.size, role);
@@ -276,9 +277,10 @@ function awayFrom(outline: Outline, edge: Edge, corner: string): Point {
  * combined curve is smooth). On each piece, the angle at the crotch point — the landmark its
  * crotch-curve and inseam edges share — between the two; laid together along the inseam, the
  * two curves continue each other without a turn when the angles add up to 180°.
- * `tolerance` (degrees) defaults to CROTCH_JOIN_TOLERANCE_DEG. Empty when a piece lacks the edges.
+ * `tolerance` (degrees) defaults to CROTCH_JOIN_TOLERANCE_DEG; `sizes` as in pairedSeamReport.
+ * Empty when a piece lacks the edges.
  */
-export function crotchJoin(pattern: Pattern, options: { first?: string; second?: string; tolerance?: number } = {}): CrotchJoin[] {
+export function crotchJoin(pattern: Pattern, options: { first?: string; second?: string; tolerance?: number; sizes?: readonly string[] } = {}): CrotchJoin[] {
   const first = pattern.pieces.find((p) => p.name === (options.first ?? 'front'));
   const second = pattern.pieces.find((p) => p.name === (options.second ?? 'back'));
   if (!first || !second) return [];
@@ -296,7 +298,7 @@ export function crotchJoin(pattern: Pattern, options: { first?: string; second?:
   };
   const out: CrotchJoin[] = [];
   for (const o of first.outlines) {
-    if (!second.outlines.some((q) => q.size === o.size)) continue;
+    if (!second.outlines.some((q) => q.size === o.size) || (options.sizes && !options.sizes.includes(o.size))) continue;
     const a = angleAt(first, o.size);
     const b = angleAt(second, o.size);
     if (a === undefined || b === undefined) continue;

@@ -247,7 +247,10 @@ describe('measurements', () => {
       expect(r.notchesMatch, `${r.size} ${r.role} notches`).toBe(true);
     }
     // and front and back crotch curves, laid together at the inseam, make one smooth curve (§3.11 shape checks)
+    // asked for one size, the same rows for that size alone
+    expect(pairedSeamReport(demo, { sizes: ['4'] })).toEqual(report.filter((r) => r.size === '4'));
     const joins = crotchJoin(demo);
+    expect(crotchJoin(demo, { sizes: ['4'] })).toEqual(joins.filter((j) => j.size === '4'));
     expect(joins).toHaveLength(11);
     for (const j of joins) expect(j.turn, j.size).toBeLessThan(0.01);
     const c = crotchLength(demo).find((x) => x.size === '10')!;

@@ -73,17 +73,23 @@ export function measureRows(now: Pattern, before: Pattern | undefined, size: str
   return rows.map((r) => ({ ...r, before: old.get(r.key) }));
 }
 
-/** The size a report is shown for: the one asked for when the report has it, else its middle size. */
-function shownSize(sizes: readonly string[], size: string | undefined): string | undefined {
+/**
+ * The size front against back is shown for: the one asked for when both pieces have it, else
+ * the middle one of the sizes they share. Only that size is measured (a drag replays often).
+ */
+function shownSize(pattern: Pattern, size: string | undefined): string | undefined {
+  const front = pattern.pieces.find((p) => p.name === 'front');
+  const back = pattern.pieces.find((p) => p.name === 'back');
+  const sizes = (front?.outlines ?? []).map((o) => o.size).filter((s) => back?.outlines.some((o) => o.size === s));
   return size !== undefined && sizes.includes(size) ? size : sizes[Math.floor((sizes.length - 1) / 2)];
 }
 
 /** Front against back for inseam and side seam; empty when there is no front and back with those edges. */
 export function pairedSeams(pattern: Pattern, size: string | undefined): PairedSeam[] {
+  const chosen = shownSize(pattern, size);
+  if (chosen === undefined) return [];
   try {
-    const report = pairedSeamReport(pattern);
-    const chosen = shownSize([...new Set(report.map((r) => r.size))], size);
-    return report.filter((r) => r.size === chosen);
+    return pairedSeamReport(pattern, { sizes: [chosen] });
   } catch (e) {
     if (e instanceof MeasureError) return [];
     throw e;
@@ -92,10 +98,10 @@ export function pairedSeams(pattern: Pattern, size: string | undefined): PairedS
 
 /** Where the front and back crotch curves meet the inseam, in the size shown; undefined when a piece lacks those edges. */
 export function crotchJoinShown(pattern: Pattern, size: string | undefined): CrotchJoin | undefined {
+  const chosen = shownSize(pattern, size);
+  if (chosen === undefined) return undefined;
   try {
-    const joins = crotchJoin(pattern);
-    const chosen = shownSize(joins.map((j) => j.size), size);
-    return joins.find((j) => j.size === chosen);
+    return crotchJoin(pattern, { sizes: [chosen] })[0];
   } catch (e) {
     if (e instanceof MeasureError) return undefined;
     throw e;
