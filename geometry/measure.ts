@@ -13,9 +13,23 @@ export class MeasureError extends Error {
   override readonly name = 'MeasureError';
 }
 
+/**
+ * Each outline's contour, parsed once while the outline object lives: measuring reads one
+ * outline for many edges and notches, and outlines are never changed in place.
+ */
+const parsedOutlines = new WeakMap<Outline, Contour>();
+function contourOfOutline(outline: Outline): Contour {
+  let contour = parsedOutlines.get(outline);
+  if (!contour) {
+    contour = outlineContour(outline);
+    parsedOutlines.set(outline, contour);
+  }
+  return contour;
+}
+
 /** The stretch of the outline that an edge names, in drawing direction. */
 export function edgeContour(outline: Outline, edge: Edge): Contour {
-  const contour = outlineContour(outline);
+  const contour = contourOfOutline(outline);
   const a = landmarkOf(outline, edge.from);
   const b = landmarkOf(outline, edge.to);
   if (!a || !b) throw new MeasureError(`edge "${edge.name}" needs landmarks "${edge.from}" and "${edge.to}" in size "${outline.size}"`);
@@ -46,7 +60,7 @@ export interface PieceMeasure {
 const CROTCH_ROLES: readonly EdgeRole[] = ['centre-front', 'centre-back', 'crotch-curve'];
 
 export function measureOutline(piece: Piece, outline: Outline): OutlineMeasure {
-  const contour = outlineContour(outline);
+  const contour = contourOfOutline(outline);
   const edges = piece.edges.map((e) => ({ name: e.name, role: e.role, length: contourLength(edgeContour(outline, e)) }));
   return {
     size: outline.size,
@@ -79,7 +93,7 @@ export function edgeLength(piece: Piece, size: string, roleOrName: string): numb
  * crossings. A line that misses the outline gives 0.
  */
 export function widthAlongLine(outline: Outline, origin: Point, direction: Point): number {
-  const contour = outlineContour(outline);
+  const contour = contourOfOutline(outline);
   const dir = vecNormalize(direction);
   const hits = contourLineIntersections(contour, origin, dir)
     .map((h) => vecDot(vecSub(h.point, origin), dir))
@@ -308,20 +322,23 @@ export function crotchJoin(pattern: Pattern, options: { first?: string; second?:
   return out;
 }
 
-/** Total crotch length per size: the centre-front, centre-back and crotch-curve edges of every piece (front + back, and a yoke's centre back). */
-export function crotchLength(pattern: Pattern): { size: string; front: number; back: number; total: number }[] {
+/**
+ * Total crotch length per size: the centre-front, centre-back and crotch-curve edges of every
+ * piece (front + back, and a yoke's centre back). `sizes`: only these.
+ */
+export function crotchLength(pattern: Pattern, options: { sizes?: readonly string[] } = {}): { size: string; front: number; back: number; total: number }[] {
   const sizes = new Map<string, { front: number; back: number }>();
   for (const piece of pattern.pieces) {
+    // only the crotch seam's edges are measured
+    const seam = piece.edges.filter((e) => CROTCH_ROLES.includes(e.role));
+    const isBack = piece.edges.some((x) => x.role === 'centre-back');
     for (const o of piece.outlines) {
-      const m = measureOutline(piece, o);
+      if (options.sizes && !options.sizes.includes(o.size)) continue;
       const entry = sizes.get(o.size) ?? { front: 0, back: 0 };
-      for (const e of m.edges) {
-        if (e.role === 'centre-back') entry.back += e.length;
-        else if (e.role === 'centre-front') entry.front += e.length;
-        else if (e.role === 'crotch-curve') {
-          if (piece.edges.some((x) => x.role === 'centre-back')) entry.back += e.length;
-          else entry.front += e.length;
-        }
+      for (const e of seam) {
+        const length = contourLength(edgeContour(o, e));
+        if (e.role === 'centre-back' || (e.role === 'crotch-curve' && isBack)) entry.back += length;
+        else entry.front += length;
       }
       sizes.set(o.size, entry);
     }
@@ -334,7 +351,7 @@ export function extentAlong(outline: Outline, direction: Point): number {
   const d = vecNormalize(direction);
   let min = Infinity;
   let max = -Infinity;
-  for (const f of contourFlatten(outlineContour(outline), 1e-4)) {
+  for (const f of contourFlatten(contourOfOutline(outline), 1e-4)) {
     const v = vecDot(f.point, d);
     min = Math.min(min, v);
     max = Math.max(max, v);

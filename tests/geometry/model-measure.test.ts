@@ -251,6 +251,7 @@ describe('measurements', () => {
     expect(pairedSeamReport(demo, { sizes: ['4'] })).toEqual(report.filter((r) => r.size === '4'));
     const joins = crotchJoin(demo);
     expect(crotchJoin(demo, { sizes: ['4'] })).toEqual(joins.filter((j) => j.size === '4'));
+    expect(crotchLength(demo, { sizes: ['4'] })).toEqual(crotchLength(demo).filter((c) => c.size === '4'));
     expect(joins).toHaveLength(11);
     for (const j of joins) expect(j.turn, j.size).toBeLessThan(0.01);
     const c = crotchLength(demo).find((x) => x.size === '10')!;

@@ -60,8 +60,10 @@ function edgeRows(pattern: Pattern, size: string | undefined): MeasureRow[] {
 }
 
 function crotchRows(pattern: Pattern, size: string | undefined): MeasureRow[] {
-  const all = crotchLength(pattern);
-  const row = all.find((r) => r.size === size) ?? (all.length === 1 ? all[0] : undefined);
+  // the size asked for alone when the pattern has it; else the only size, when there is one
+  const asked = size !== undefined ? crotchLength(pattern, { sizes: [size] })[0] : undefined;
+  const all = asked ? [] : crotchLength(pattern);
+  const row = asked ?? (all.length === 1 ? all[0] : undefined);
   return row ? [{ key: 'crotch:total', piece: 'front + back', label: 'Crotch length', now: row.total }] : [];
 }
 
