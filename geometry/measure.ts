@@ -165,19 +165,19 @@ export interface PairedSeam {
 const ON_SEAM = 0.05;
 
 /**
- * The notches on one piece's edge with this role, with their distance along it from `from`:
- * the end of the edge it shares with an edge of role `fromRole`. Undefined when the piece has
- * no such edge or they share no end.
+ * One piece's part of a seam in a size: the length of its edge with this role and the notches on
+ * it, by their distance along it from its end shared with an edge of role `fromRole` (undefined
+ * when it shares none: nothing to measure from). Undefined when the piece has no such edge.
  */
-function edgeNotches(piece: Piece, size: string, role: EdgeRole, fromRole: EdgeRole): { length: number; notches: { name: string; at: number }[] } | undefined {
+function seamPart(piece: Piece, size: string, role: EdgeRole, fromRole: EdgeRole): { length: number; notches?: { name: string; at: number }[] } | undefined {
   const edge = piece.edges.find((e) => e.role === role);
-  const other = piece.edges.find((e) => e.role === fromRole);
   const outline = piece.outlines.find((o) => o.size === size);
-  if (!edge || !other || !outline) return undefined;
-  const start = [other.from, other.to].includes(edge.from) ? 'from' : [other.from, other.to].includes(edge.to) ? 'to' : undefined;
-  if (!start) return undefined;
+  if (!edge || !outline) return undefined;
   const stretch = edgeContour(outline, edge);
   const length = contourLength(stretch);
+  const other = piece.edges.find((e) => e.role === fromRole);
+  const start = !other ? undefined : [other.from, other.to].includes(edge.from) ? 'from' : [other.from, other.to].includes(edge.to) ? 'to' : undefined;
+  if (!start) return { length };
   const notches: { name: string; at: number }[] = [];
   for (const lm of outline.points) {
     if (lm.kind !== 'notch') continue;
@@ -187,6 +187,14 @@ function edgeNotches(piece: Piece, size: string, role: EdgeRole, fromRole: EdgeR
     notches.push({ name: lm.name, at: start === 'from' ? along : length - along });
   }
   return { length, notches: notches.sort((a, b) => a.at - b.at) };
+}
+
+/** The sizes two pieces (by name; front and back unless named) both have, in the first one's order. */
+export function pairedSizes(pattern: Pattern, first = 'front', second = 'back'): string[] {
+  const a = pattern.pieces.find((p) => p.name === first);
+  const b = pattern.pieces.find((p) => p.name === second);
+  if (!a || !b) return [];
+  return a.outlines.map((o) => o.size).filter((size) => b.outlines.some((o) => o.size === size));
 }
 
 /** Which side of the body a piece lies on, by its centre seam. */
@@ -220,34 +228,34 @@ export function pairedSeamReport(
   const roles = options.roles ?? (['inseam', 'side-seam'] as const);
   const tol = options.tolerance ?? PAIRED_SEAM_TOLERANCE;
   const others = pattern.pieces.filter((p) => p !== first && p !== second);
+  // pieces continue a side only when the two named pieces lie on different sides of the body
+  const continued = bodySide(first) !== bodySide(second);
   const sideOf = (named: Piece, size: string, role: EdgeRole): SeamSide | undefined => {
-    const own = edgeLength(named, size, role);
+    const own = seamPart(named, size, role, 'hem');
     if (own === undefined) return undefined;
     const side = bodySide(named);
     const pieces = [named.name];
-    let length = own;
+    let length = own.length;
     // notches from the hem up: the named piece's, then a continuing piece's from its end away from the waist
-    const fromHem = edgeNotches(named, size, role, 'hem');
-    const notches: SeamNotch[] | undefined = fromHem?.notches.map((n) => ({ piece: named.name, name: n.name, fromHem: n.at }));
-    if (side !== undefined && bodySide(first) !== bodySide(second)) {
+    const notches: SeamNotch[] | undefined = own.notches?.map((n) => ({ piece: named.name, name: n.name, fromHem: n.at }));
+    if (side !== undefined && continued) {
       for (const p of others) {
         if (bodySide(p) !== side || !p.outlines.some((o) => o.size === size)) continue;
-        const more = edgeLength(p, size, role);
+        const more = seamPart(p, size, role, 'waist');
         if (more === undefined) continue;
-        const fromWaist = notches && edgeNotches(p, size, role, 'waist');
-        if (fromWaist) for (const n of fromWaist.notches) notches!.push({ piece: p.name, name: n.name, fromHem: length + fromWaist.length - n.at });
+        if (notches && more.notches) for (const n of more.notches) notches.push({ piece: p.name, name: n.name, fromHem: length + more.length - n.at });
         pieces.push(p.name);
-        length += more;
+        length += more.length;
       }
     }
     return { piece: pieces.join(' + '), pieces, length, ...(notches ? { notches: notches.sort((a, b) => a.fromHem - b.fromHem) } : {}) };
   };
   const out: PairedSeam[] = [];
-  for (const o of first.outlines) {
-    if (!second.outlines.some((q) => q.size === o.size) || (options.sizes && !options.sizes.includes(o.size))) continue;
+  for (const size of pairedSizes(pattern, first.name, second.name)) {
+    if (options.sizes && !options.sizes.includes(size)) continue;
     for (const role of roles) {
-      const a = sideOf(first, o.size, role);
-      const b = sideOf(second, o.size, role);
+      const a = sideOf(first, size, role);
+      const b = sideOf(second, size, role);
       if (a === undefined || b === undefined) continue;
       const difference = a.length - b.length;
       const an = a.notches ?? [];
@@ -259,7 +267,7 @@ export function pairedSeamReport(
         notches.push({ first: an[k]!, second: bn[k]!, difference: d, withinTolerance: Math.abs(d) <= tol });
       }
       const notchesMatch = !measurable || (an.length === bn.length && notches.every((n) => n.withinTolerance));
-      out.push({ size: o.size, role, first: a, second: b, difference, withinTolerance: Math.abs(difference) <= tol, notches, notchesMatch });
+      out.push({ size, role, first: a, second: b, difference, withinTolerance: Math.abs(difference) <= tol, notches, notchesMatch });
     }
   }
   return out;
@@ -311,13 +319,13 @@ export function crotchJoin(pattern: Pattern, options: { first?: string; second?:
     return (Math.acos(Math.max(-1, Math.min(1, vecDot(a, b)))) * 180) / Math.PI;
   };
   const out: CrotchJoin[] = [];
-  for (const o of first.outlines) {
-    if (!second.outlines.some((q) => q.size === o.size) || (options.sizes && !options.sizes.includes(o.size))) continue;
-    const a = angleAt(first, o.size);
-    const b = angleAt(second, o.size);
+  for (const size of pairedSizes(pattern, first.name, second.name)) {
+    if (options.sizes && !options.sizes.includes(size)) continue;
+    const a = angleAt(first, size);
+    const b = angleAt(second, size);
     if (a === undefined || b === undefined) continue;
     const turn = Math.abs(180 - a - b);
-    out.push({ size: o.size, first: { piece: first.name, angle: a }, second: { piece: second.name, angle: b }, turn, smooth: turn <= tol });
+    out.push({ size, first: { piece: first.name, angle: a }, second: { piece: second.name, angle: b }, turn, smooth: turn <= tol });
   }
   return out;
 }

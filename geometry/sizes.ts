@@ -36,3 +36,13 @@ export function matchSizeLabel(label: string, sizes: readonly string[]): string 
   const same = sizes.filter((s) => sizeKey(s) === key);
   return same.length === 1 ? same[0] : undefined;
 }
+
+/**
+ * A typed size as the pattern labels it when it is written differently ("Size 08" → "8",
+ * "xl" → "XL"; `matchSizeLabel`), unless one of `others` (the table's other rows) already has
+ * that label; otherwise as typed.
+ */
+export function asPatternSize(size: string, patternSizes: readonly string[], others: Iterable<string> = []): string {
+  const to = matchSizeLabel(size, patternSizes);
+  return to !== undefined && ![...others].includes(to) ? to : size;
+}

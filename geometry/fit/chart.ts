@@ -14,7 +14,7 @@
  */
 import { z } from 'zod';
 import { type Pattern, type Piece, landmarkOf, orderedOutlines } from '../model.ts';
-import { matchSizeLabel, sizeNumber } from '../sizes.ts';
+import { asPatternSize, sizeNumber } from '../sizes.ts';
 import { crotchLength, edgeLength, widthAtLevel } from '../measure.ts';
 import { pieceGrain } from '../ops/common.ts';
 import { BODY_MEASUREMENT_NAMES, FitInputError, describeZodError } from './body.ts';
@@ -205,9 +205,8 @@ export function alignChartSizes(chart: SizeChart, sizes: readonly string[]): Siz
   const taken = new Set(chart.sizes.filter((s) => sizes.includes(s.size)).map((s) => s.size));
   let changed = false;
   const out = chart.sizes.map((s) => {
-    if (taken.has(s.size)) return s;
-    const to = matchSizeLabel(s.size, sizes);
-    if (to === undefined || taken.has(to)) return s;
+    const to = asPatternSize(s.size, sizes, taken);
+    if (to === s.size) return s;
     taken.add(to);
     changed = true;
     return { ...s, size: to };

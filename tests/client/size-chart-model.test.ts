@@ -4,13 +4,12 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { BODY_MEASUREMENT_NAMES, FIT_GIRTH_TOLERANCE, FIT_LENGTH_TOLERANCE, GIRTH_LEVELS, LENGTH_MEASURES, formatLength, sizeChartSchema } from '../../geometry/index.ts';
+import { BODY_MEASUREMENT_NAMES, FIT_GIRTH_TOLERANCE, FIT_LENGTH_TOLERANCE, GIRTH_LEVELS, LENGTH_MEASURES, asPatternSize, formatLength, sizeChartSchema } from '../../geometry/index.ts';
 import {
   BODY_COLUMNS,
   FIT_GIRTH_TOLERANCE as CLIENT_GIRTH_TOLERANCE,
   FIT_LENGTH_TOLERANCE as CLIENT_LENGTH_TOLERANCE,
   GARMENT_COLUMNS,
-  asPatternSize,
   cellKey,
   chartInputFromDraft,
   columnForHeading,

@@ -1,6 +1,7 @@
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import { useCallback, useId, useMemo, useState } from 'react';
 import { useBeforeUnload, useBlocker } from 'react-router-dom';
+import { asPatternSize } from '../../../../geometry/sizes.ts';
 import { formatLength, type LengthUnit } from '../../../../geometry/units.ts';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
@@ -19,7 +20,6 @@ import {
   FIT_GIRTH_TOLERANCE,
   FIT_LENGTH_TOLERANCE,
   GARMENT_COLUMNS,
-  asPatternSize,
   cellKey,
   chartInputFromDraft,
   columnsOf,

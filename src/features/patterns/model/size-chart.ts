@@ -6,7 +6,7 @@
  * inside; text in the person's unit (or with its own unit) at the edges, read by geometry's
  * `parseLength` (`30 1/2`, `30.5in`, `77.5 cm`, `775 mm`).
  */
-import { matchSizeLabel } from '../../../../geometry/sizes.ts';
+import { asPatternSize } from '../../../../geometry/sizes.ts';
 import { type LengthUnit, LengthParseError, formatLength, parseLength } from '../../../../geometry/units.ts';
 
 /**
@@ -195,16 +195,6 @@ export interface PasteResult {
   readonly errors: readonly string[];
   /** Things left out on purpose (an unknown heading's column). */
   readonly notes: readonly string[];
-}
-
-/**
- * A typed size as the pattern labels it when it is written differently ("Size 08" → "8",
- * "xl" → "XL"; geometry's `matchSizeLabel`), unless one of `others` (the table's other rows)
- * already has that label; otherwise as typed.
- */
-export function asPatternSize(size: string, patternSizes: readonly string[], others: readonly string[] = []): string {
-  const to = matchSizeLabel(size, patternSizes);
-  return to !== undefined && !others.includes(to) ? to : size;
 }
 
 /**

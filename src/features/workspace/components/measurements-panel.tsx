@@ -1,7 +1,16 @@
-import { memo } from 'react';
+import { type ReactNode, memo } from 'react';
 import { formatLength, type LengthUnit, PAIRED_SEAM_TOLERANCE, type Pattern } from '../../../../geometry/index.ts';
 import { cx } from '../../../lib/cx';
 import { EDGE_LABELS, crotchJoinShown, crotchJoinWords, measureRows, notchWords, pairedSeams } from '../model/measurements';
+
+/** One check of front against back: quiet when it holds, an alert when the pieces need truing. */
+function Verdict({ ok, children }: { ok: boolean; children: ReactNode }) {
+  return (
+    <p role={ok ? undefined : 'alert'} className={cx('rounded-md px-2 py-1 text-sm', ok ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}>
+      {children}
+    </p>
+  );
+}
 
 /**
  * Seam lengths and crotch length of the altered pattern, with the change a chosen alteration
@@ -57,13 +66,8 @@ export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, 
           <h3 className="text-sm font-semibold text-ink-900">Paired seams (front against back)</h3>
           {pairs.map((p) => {
             const notches = notchWords(p, unit);
-            const ok = p.withinTolerance && p.notchesMatch;
             return (
-              <p
-                key={`${p.size}:${p.role}`}
-                role={ok ? undefined : 'alert'}
-                className={cx('rounded-md px-2 py-1 text-sm', ok ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}
-              >
+              <Verdict key={`${p.size}:${p.role}`} ok={p.withinTolerance && p.notchesMatch}>
                 {EDGE_LABELS[p.role]}: {p.first.piece} {formatLength(p.first.length, unit)}, {p.second.piece} {formatLength(p.second.length, unit)} —{' '}
                 {p.withinTolerance
                   ? `within ${formatLength(PAIRED_SEAM_TOLERANCE, unit)}`
@@ -73,14 +77,10 @@ export const MeasurementsPanel = memo(function MeasurementsPanel({ now, before, 
                     {p.notchesMatch ? notches : `${notches}: move the notches to meet before cutting`}
                   </span>
                 )}
-              </p>
+              </Verdict>
             );
           })}
-          {join && (
-            <p role={join.smooth ? undefined : 'alert'} className={cx('rounded-md px-2 py-1 text-sm', join.smooth ? 'bg-sage-50 text-sage-700' : 'bg-madder-50 font-semibold text-madder-700')}>
-              {crotchJoinWords(join)}
-            </p>
-          )}
+          {join && <Verdict ok={join.smooth}>{crotchJoinWords(join)}</Verdict>}
         </div>
       )}
     </section>

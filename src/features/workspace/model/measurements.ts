@@ -17,6 +17,7 @@ import {
   PAIRED_SEAM_TOLERANCE,
   type PairedSeam,
   pairedSeamReport,
+  pairedSizes,
   type Pattern,
   type Piece,
 } from '../../../../geometry/index.ts';
@@ -80,9 +81,7 @@ export function measureRows(now: Pattern, before: Pattern | undefined, size: str
  * the middle one of the sizes they share. Only that size is measured (a drag replays often).
  */
 function shownSize(pattern: Pattern, size: string | undefined): string | undefined {
-  const front = pattern.pieces.find((p) => p.name === 'front');
-  const back = pattern.pieces.find((p) => p.name === 'back');
-  const sizes = (front?.outlines ?? []).map((o) => o.size).filter((s) => back?.outlines.some((o) => o.size === s));
+  const sizes = pairedSizes(pattern);
   return size !== undefined && sizes.includes(size) ? size : sizes[Math.floor((sizes.length - 1) / 2)];
 }
 
